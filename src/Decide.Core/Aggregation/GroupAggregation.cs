@@ -1,0 +1,69 @@
+using Decide.Core.Fuzzy;
+using Decide.Core.Model;
+
+namespace Decide.Core.Aggregation;
+
+/// <summary>
+/// Combines several assessors' TFNs for one cell (or one weight) into the panel's TFN.
+/// </summary>
+/// <remarks>
+/// Mean: x̃ = Σₖ ωₖ x̃ᵏ with ωₖ = assessor weights renormalised over those who rated the cell (Chen 2000, eq. 8,
+/// where all ωₖ = 1/K). Geometric: each component is Πₖ (xᵏ)^ωₖ. A declined or unassigned cell is simply absent
+/// from the values passed in: the weights of those who did rate it are renormalised. Nothing is imputed.
+/// </remarks>
+public static class GroupAggregation
+{
+    /// <summary>
+    /// Aggregates <paramref name="values"/> with the matching <paramref name="weights"/> (positive, any total).
+    /// </summary>
+    /// <exception cref="ArgumentException">No values, lengths differ, or a weight is not positive.</exception>
+    public static Tfn Aggregate(ReadOnlySpan<Tfn> values, ReadOnlySpan<double> weights, AggregationRule rule)
+    {
+        if (values.Length == 0 || values.Length != weights.Length)
+        {
+            throw new ArgumentException("Aggregation needs at least one value and one weight per value.");
+        }
+
+        double total = 0;
+        foreach (var w in weights)
+        {
+            if (!(w > 0) || !double.IsFinite(w))
+            {
+                throw new ArgumentException("Assessor weights must be positive and finite.", nameof(weights));
+            }
+
+            total += w;
+        }
+
+        return rule == AggregationRule.Mean ? Mean(values, weights, total) : Geometric(values, weights, total);
+    }
+
+    private static Tfn Mean(ReadOnlySpan<Tfn> values, ReadOnlySpan<double> weights, double total)
+    {
+        double l = 0, m = 0, u = 0;
+        for (var k = 0; k < values.Length; k++)
+        {
+            var w = weights[k] / total;
+            l += w * values[k].Lower;
+            m += w * values[k].Middle;
+            u += w * values[k].Upper;
+        }
+
+        // Rounding can leave l a hair above m when every input is the same crisp value; restore the order.
+        return Tfn.Unchecked(Math.Min(l, m), m, Math.Max(u, m));
+    }
+
+    private static Tfn Geometric(ReadOnlySpan<Tfn> values, ReadOnlySpan<double> weights, double total)
+    {
+        double l = 1, m = 1, u = 1;
+        for (var k = 0; k < values.Length; k++)
+        {
+            var w = weights[k] / total;
+            l *= Math.Pow(values[k].Lower, w);
+            m *= Math.Pow(values[k].Middle, w);
+            u *= Math.Pow(values[k].Upper, w);
+        }
+
+        return Tfn.Unchecked(Math.Min(l, m), m, Math.Max(u, m));
+    }
+}

@@ -1,0 +1,613 @@
+using Decide.Core.Consistency;
+using Decide.Core.Model;
+
+namespace Decide.Core.Analysis;
+
+/// <summary>
+/// Checks an evaluation before analysis and reports every problem with its place (a JSON path into the portable
+/// file) and a reason a user can act on. Nothing is repaired or imputed.
+/// </summary>
+public static class EvaluationValidator
+{
+    /// <summary>The id reserved for the panel's aggregate in results.</summary>
+    public const string PanelId = "panel";
+
+    /// <summary>Returns every problem found; an empty list means the evaluation can be analysed.</summary>
+    public static IReadOnlyList<EvaluationError> Validate(Evaluation evaluation)
+    {
+        var v = new Walker(evaluation);
+        v.Run();
+        return v.Errors;
+    }
+
+    /// <summary>Throws <see cref="InvalidEvaluationException"/> listing every problem, if there is any.</summary>
+    public static void EnsureValid(Evaluation evaluation)
+    {
+        var errors = Validate(evaluation);
+        if (errors.Count > 0)
+        {
+            throw new InvalidEvaluationException(errors);
+        }
+    }
+
+    private sealed class Walker(Evaluation e)
+    {
+        private readonly List<EvaluationError> _found = [];
+        private readonly Dictionary<string, Criterion> _criteria = new(StringComparer.Ordinal);
+        private readonly Dictionary<string, CriterionGroup> _groups = new(StringComparer.Ordinal);
+        private readonly Dictionary<string, Assessor> _assessors = new(StringComparer.Ordinal);
+        private readonly HashSet<string> _alternatives = new(StringComparer.Ordinal);
+
+        public IReadOnlyList<EvaluationError> Errors => _found;
+
+        public void Run()
+        {
+            if (string.IsNullOrWhiteSpace(e.Title))
+            {
+                Add("$.title", "the evaluation needs a title");
+            }
+
+            Structure();
+            var excluded = Gates();
+            switch (e.Weighting)
+            {
+                case WeightingMethod.Importance:
+                    Importance();
+                    break;
+                case WeightingMethod.Pairwise:
+                    Pairwise();
+                    break;
+            }
+
+            Values(excluded);
+            Ratings(excluded);
+        }
+
+        private void Add(string path, string reason) => _found.Add(new EvaluationError(path, reason));
+
+        private void Structure()
+        {
+            for (var g = 0; g < e.Groups.Count; g++)
+            {
+                var group = e.Groups[g];
+                var at = $"$.groups[{g}]";
+                if (CheckId(group.Id, $"{at}.id") && !_groups.TryAdd(group.Id, group))
+                {
+                    Add($"{at}.id", $"group id \"{group.Id}\" is used twice");
+                }
+            }
+
+            if (e.Criteria.Count == 0)
+            {
+                Add("$.criteria", "the evaluation needs at least one criterion");
+            }
+
+            for (var c = 0; c < e.Criteria.Count; c++)
+            {
+                var criterion = e.Criteria[c];
+                var at = $"$.criteria[{c}]";
+                if (CheckId(criterion.Id, $"{at}.id"))
+                {
+                    if (_groups.ContainsKey(criterion.Id))
+                    {
+                        Add($"{at}.id", $"criterion id \"{criterion.Id}\" is also a group id; ids of criteria and groups must differ");
+                    }
+                    else if (!_criteria.TryAdd(criterion.Id, criterion))
+                    {
+                        Add($"{at}.id", $"criterion id \"{criterion.Id}\" is used twice");
+                    }
+                }
+
+                if (string.IsNullOrWhiteSpace(criterion.Name))
+                {
+                    Add($"{at}.name", $"criterion \"{criterion.Id}\" needs a name");
+                }
+
+                if (criterion.Group is { } group)
+                {
+                    if (criterion.Kind == CriterionKind.Gate)
+                    {
+                        Add($"{at}.group", $"gate \"{criterion.Id}\" cannot sit in a group: gates are pass/fail and carry no weight");
+                    }
+                    else if (!_groups.ContainsKey(group))
+                    {
+                        Add($"{at}.group", $"unknown group \"{group}\"; declare it under $.groups");
+                    }
+                }
+
+                if (criterion.Kind == CriterionKind.Linguistic && criterion.Direction == Direction.Cost
+                    && e.RatingScale.Terms.Min(t => t.Value.Lower) <= 0)
+                {
+                    Add($"{at}.direction",
+                        $"linguistic cost criterion \"{criterion.Id}\" needs a rating scale whose terms all have a lower value above 0 (Chen's cost normalisation divides by it), and \"{e.RatingScale.Name}\" starts at 0; rate it as a benefit instead (for example, how well a risk is managed)");
+                }
+
+                if (criterion.Descriptors is { } descriptors)
+                {
+                    foreach (var code in descriptors.Keys)
+                    {
+                        if (!e.RatingScale.TryFind(code, out _))
+                        {
+                            Add(JsonPath.Keys(at, "descriptors", code), $"descriptor for unknown term \"{code}\"; the rating scale has {e.RatingScale.CodeList}");
+                        }
+                    }
+                }
+            }
+
+            if (e.Criteria.Count > 0 && e.Criteria.All(c => c.Kind == CriterionKind.Gate))
+            {
+                Add("$.criteria", "every criterion is a pass/fail gate; at least one criterion must be scored (linguistic or numeric) to rank the alternatives");
+            }
+
+            foreach (var group in e.Groups)
+            {
+                if (!e.Criteria.Any(c => c.Group == group.Id))
+                {
+                    Add(JsonPath.Key("$.groups", group.Id), $"group \"{group.Id}\" has no criteria");
+                }
+            }
+
+            if (e.Alternatives.Count == 0)
+            {
+                Add("$.alternatives", "the evaluation needs at least one alternative");
+            }
+
+            for (var a = 0; a < e.Alternatives.Count; a++)
+            {
+                var alternative = e.Alternatives[a];
+                var at = $"$.alternatives[{a}]";
+                if (CheckId(alternative.Id, $"{at}.id") && !_alternatives.Add(alternative.Id))
+                {
+                    Add($"{at}.id", $"alternative id \"{alternative.Id}\" is used twice");
+                }
+
+                if (string.IsNullOrWhiteSpace(alternative.Name))
+                {
+                    Add($"{at}.name", $"alternative \"{alternative.Id}\" needs a name");
+                }
+            }
+
+            if (e.Assessors.Count == 0)
+            {
+                Add("$.assessors", "the evaluation needs at least one assessor");
+            }
+
+            for (var k = 0; k < e.Assessors.Count; k++)
+            {
+                var assessor = e.Assessors[k];
+                var at = $"$.assessors[{k}]";
+                if (CheckId(assessor.Id, $"{at}.id"))
+                {
+                    if (assessor.Id == PanelId)
+                    {
+                        Add($"{at}.id", $"\"{PanelId}\" is reserved for the panel's aggregate; choose another id");
+                    }
+                    else if (!_assessors.TryAdd(assessor.Id, assessor))
+                    {
+                        Add($"{at}.id", $"assessor id \"{assessor.Id}\" is used twice");
+                    }
+                }
+
+                if (!(assessor.Weight > 0) || !double.IsFinite(assessor.Weight))
+                {
+                    Add($"{at}.weight", $"assessor \"{assessor.Id}\" has weight {assessor.Weight}; a weight must be a positive number");
+                }
+
+                if (assessor.Criteria is { } assigned)
+                {
+                    for (var c = 0; c < assigned.Count; c++)
+                    {
+                        if (!_criteria.TryGetValue(assigned[c], out var criterion))
+                        {
+                            Add($"{at}.criteria[{c}]", $"unknown criterion \"{assigned[c]}\"");
+                        }
+                        else if (criterion.Kind != CriterionKind.Linguistic)
+                        {
+                            Add($"{at}.criteria[{c}]", $"criterion \"{assigned[c]}\" is {Describe(criterion.Kind)}; only linguistic criteria are assigned to assessors");
+                        }
+                    }
+                }
+            }
+        }
+
+        private bool CheckId(string id, string path)
+        {
+            if (string.IsNullOrWhiteSpace(id))
+            {
+                Add(path, "an id must not be empty");
+                return false;
+            }
+
+            return true;
+        }
+
+        private HashSet<string> Gates()
+        {
+            var excluded = new HashSet<string>(StringComparer.Ordinal);
+            var seen = new HashSet<(string, string)>();
+            foreach (var gate in e.Gates)
+            {
+                var at = JsonPath.Keys("$.gates", gate.Alternative, gate.Criterion);
+                if (!_alternatives.Contains(gate.Alternative))
+                {
+                    Add(JsonPath.Key("$.gates", gate.Alternative), $"unknown alternative \"{gate.Alternative}\"");
+                    continue;
+                }
+
+                if (!_criteria.TryGetValue(gate.Criterion, out var criterion))
+                {
+                    Add(at, $"unknown criterion \"{gate.Criterion}\"");
+                    continue;
+                }
+
+                if (criterion.Kind != CriterionKind.Gate)
+                {
+                    Add(at, $"criterion \"{gate.Criterion}\" is {Describe(criterion.Kind)}, not a gate");
+                    continue;
+                }
+
+                if (!seen.Add((gate.Alternative, gate.Criterion)))
+                {
+                    Add(at, "this gate result is given twice");
+                }
+
+                if (!gate.Passed)
+                {
+                    excluded.Add(gate.Alternative);
+                }
+            }
+
+            foreach (var criterion in e.Criteria.Where(c => c.Kind == CriterionKind.Gate))
+            {
+                foreach (var alternative in e.Alternatives)
+                {
+                    if (!seen.Contains((alternative.Id, criterion.Id)))
+                    {
+                        Add(JsonPath.Keys("$.gates", alternative.Id, criterion.Id),
+                            $"no pass/fail result for alternative \"{alternative.Id}\" on gate \"{criterion.Id}\"; a gate is never assumed passed");
+                    }
+                }
+            }
+
+            return excluded;
+        }
+
+        /// <summary>Weighted nodes: groups and the criteria that carry weight.</summary>
+        private bool IsNode(string id) =>
+            _groups.ContainsKey(id) || (_criteria.TryGetValue(id, out var c) && c.Kind != CriterionKind.Gate);
+
+        private IEnumerable<string> Nodes() =>
+            e.Groups.Select(g => g.Id).Concat(e.Criteria.Where(c => c.Kind != CriterionKind.Gate).Select(c => c.Id)).Distinct();
+
+        private void Importance()
+        {
+            if (e.Importance.Count == 0)
+            {
+                Add("$.importance", "weighting is \"importance\" but nobody has rated the criteria's importance");
+                return;
+            }
+
+            var given = new Dictionary<string, HashSet<string>>(StringComparer.Ordinal);
+            foreach (var rating in e.Importance)
+            {
+                var at = JsonPath.Keys("$.importance", rating.Assessor, rating.Node);
+                if (!_assessors.ContainsKey(rating.Assessor))
+                {
+                    Add(JsonPath.Key("$.importance", rating.Assessor), $"unknown assessor \"{rating.Assessor}\"");
+                    continue;
+                }
+
+                if (!IsNode(rating.Node))
+                {
+                    Add(at, _criteria.TryGetValue(rating.Node, out var c) && c.Kind == CriterionKind.Gate
+                        ? $"\"{rating.Node}\" is a pass/fail gate and carries no weight"
+                        : $"unknown criterion or group \"{rating.Node}\"");
+                    continue;
+                }
+
+                if (!e.ImportanceScale.TryFind(rating.Term, out _))
+                {
+                    Add(at, $"unknown term \"{rating.Term}\"; the importance scale has {e.ImportanceScale.CodeList}");
+                }
+
+                var set = given.TryGetValue(rating.Assessor, out var s) ? s : given[rating.Assessor] = new HashSet<string>(StringComparer.Ordinal);
+                if (!set.Add(rating.Node))
+                {
+                    Add(at, "importance is given twice");
+                }
+            }
+
+            foreach (var (assessor, nodes) in given)
+            {
+                var missing = Nodes().Where(n => !nodes.Contains(n)).ToArray();
+                if (missing.Length > 0)
+                {
+                    Add(JsonPath.Key("$.importance", assessor),
+                        $"assessor \"{assessor}\" has not rated the importance of {List(missing)}; an assessor who weighs must weigh every criterion and group");
+                }
+            }
+        }
+
+        private void Pairwise()
+        {
+            if (e.Pairwise.Count == 0)
+            {
+                Add("$.pairwise", "weighting is \"pairwise\" but nobody has compared the criteria");
+                return;
+            }
+
+            var matrices = MatrixOf();
+            foreach (var (name, items) in matrices)
+            {
+                if (items.Count > RandomIndex.MaxOrder)
+                {
+                    Add(name == "" ? "$.criteria" : JsonPath.Key("$.groups", name),
+                        $"{items.Count} items are compared in one matrix; pairwise comparison is limited to {RandomIndex.MaxOrder} (group the criteria)");
+                }
+            }
+
+            var index = new Dictionary<string, int>(StringComparer.Ordinal);
+            var pairs = new Dictionary<string, Dictionary<(string, string), int>>(StringComparer.Ordinal);
+            foreach (var judgement in e.Pairwise)
+            {
+                var k = index[judgement.Assessor] = index.GetValueOrDefault(judgement.Assessor, -1) + 1;
+                var at = JsonPath.Index(JsonPath.Key("$.pairwise", judgement.Assessor), k);
+                if (!_assessors.ContainsKey(judgement.Assessor))
+                {
+                    Add(JsonPath.Key("$.pairwise", judgement.Assessor), $"unknown assessor \"{judgement.Assessor}\"");
+                    continue;
+                }
+
+                var ok = true;
+                foreach (var (field, id) in new[] { ("row", judgement.Row), ("col", judgement.Col) })
+                {
+                    if (!IsNode(id))
+                    {
+                        Add($"{at}.{field}", _criteria.TryGetValue(id, out var c) && c.Kind == CriterionKind.Gate
+                            ? $"\"{id}\" is a pass/fail gate and is not weighed"
+                            : $"unknown criterion or group \"{id}\"");
+                        ok = false;
+                    }
+                }
+
+                if (!ok)
+                {
+                    continue;
+                }
+
+                if (judgement.Row == judgement.Col)
+                {
+                    Add(at, $"\"{judgement.Row}\" is compared with itself");
+                    continue;
+                }
+
+                if (ParentOf(judgement.Row) != ParentOf(judgement.Col))
+                {
+                    Add(at, $"\"{judgement.Row}\" and \"{judgement.Col}\" are not in the same group; compare criteria within a group, and groups with each other and with top-level criteria");
+                    continue;
+                }
+
+                if (!(judgement.Value.Lower > 0))
+                {
+                    Add($"{at}.tfn", $"a pairwise judgement must be above 0; got {judgement.Value}");
+                }
+
+                var set = pairs.TryGetValue(judgement.Assessor, out var s) ? s : pairs[judgement.Assessor] = [];
+                var key = string.CompareOrdinal(judgement.Row, judgement.Col) < 0 ? (judgement.Row, judgement.Col) : (judgement.Col, judgement.Row);
+                if (set.TryGetValue(key, out var first))
+                {
+                    Add(at, $"the pair {judgement.Row}–{judgement.Col} is already judged at index {first}; give each pair once");
+                }
+                else
+                {
+                    set[key] = k;
+                }
+            }
+
+            foreach (var (assessor, given) in pairs)
+            {
+                var missing = new List<string>();
+                foreach (var (_, items) in matrices)
+                {
+                    for (var i = 0; i < items.Count; i++)
+                    {
+                        for (var j = i + 1; j < items.Count; j++)
+                        {
+                            var key = string.CompareOrdinal(items[i], items[j]) < 0 ? (items[i], items[j]) : (items[j], items[i]);
+                            if (!given.ContainsKey(key))
+                            {
+                                missing.Add($"{items[i]}–{items[j]}");
+                            }
+                        }
+                    }
+                }
+
+                if (missing.Count > 0)
+                {
+                    Add(JsonPath.Key("$.pairwise", assessor),
+                        $"assessor \"{assessor}\" has not compared {List(missing)}; every pair must be judged once");
+                }
+            }
+        }
+
+        private string ParentOf(string node) =>
+            _criteria.TryGetValue(node, out var c) && c.Group is { } g ? g : "";
+
+        /// <summary>The matrices to fill: "" for the top level (groups and ungrouped criteria), then one per group.</summary>
+        private List<(string Name, List<string> Items)> MatrixOf()
+        {
+            var top = e.Groups.Select(g => g.Id)
+                .Concat(e.Criteria.Where(c => c.Kind != CriterionKind.Gate && c.Group is null).Select(c => c.Id))
+                .Distinct().ToList();
+            var result = new List<(string, List<string>)> { ("", top) };
+            foreach (var group in e.Groups)
+            {
+                result.Add((group.Id, e.Criteria.Where(c => c.Kind != CriterionKind.Gate && c.Group == group.Id).Select(c => c.Id).ToList()));
+            }
+
+            return result;
+        }
+
+        private void Values(HashSet<string> excluded)
+        {
+            var seen = new HashSet<(string, string)>();
+            foreach (var value in e.Values)
+            {
+                var at = JsonPath.Keys("$.values", value.Alternative, value.Criterion);
+                if (!_alternatives.Contains(value.Alternative))
+                {
+                    Add(JsonPath.Key("$.values", value.Alternative), $"unknown alternative \"{value.Alternative}\"");
+                    continue;
+                }
+
+                if (!_criteria.TryGetValue(value.Criterion, out var criterion))
+                {
+                    Add(at, $"unknown criterion \"{value.Criterion}\"");
+                    continue;
+                }
+
+                if (criterion.Kind != CriterionKind.Numeric)
+                {
+                    Add(at, $"criterion \"{value.Criterion}\" is {Describe(criterion.Kind)}; only numeric criteria take values");
+                    continue;
+                }
+
+                if (!seen.Add((value.Alternative, value.Criterion)))
+                {
+                    Add(at, "this value is given twice");
+                }
+
+                if (!double.IsFinite(value.Value))
+                {
+                    Add(at, "the value must be a finite number");
+                }
+                else if (criterion.Direction == Direction.Cost && !(value.Value > 0))
+                {
+                    Add(at, $"cost criterion \"{value.Criterion}\" needs values above 0 (its normalisation divides by the value); got {value.Value}");
+                }
+                else if (value.Value < 0)
+                {
+                    Add(at, $"values must not be negative; got {value.Value}");
+                }
+            }
+
+            foreach (var criterion in e.Criteria.Where(c => c.Kind == CriterionKind.Numeric))
+            {
+                foreach (var alternative in e.Alternatives.Where(a => !excluded.Contains(a.Id)))
+                {
+                    if (!seen.Contains((alternative.Id, criterion.Id)))
+                    {
+                        Add(JsonPath.Keys("$.values", alternative.Id, criterion.Id),
+                            $"no value for alternative \"{alternative.Id}\" on numeric criterion \"{criterion.Id}\"");
+                    }
+                }
+            }
+        }
+
+        private void Ratings(HashSet<string> excluded)
+        {
+            var cells = new Dictionary<(string Assessor, string Alternative, string Criterion), Rating>();
+            foreach (var rating in e.Ratings)
+            {
+                var at = JsonPath.Keys("$.ratings", rating.Assessor, rating.Alternative, rating.Criterion);
+                if (!_assessors.TryGetValue(rating.Assessor, out var assessor))
+                {
+                    Add(JsonPath.Key("$.ratings", rating.Assessor), $"unknown assessor \"{rating.Assessor}\"");
+                    continue;
+                }
+
+                if (!_alternatives.Contains(rating.Alternative))
+                {
+                    Add(JsonPath.Keys("$.ratings", rating.Assessor, rating.Alternative), $"unknown alternative \"{rating.Alternative}\"");
+                    continue;
+                }
+
+                if (!_criteria.TryGetValue(rating.Criterion, out var criterion))
+                {
+                    Add(at, $"unknown criterion \"{rating.Criterion}\"");
+                    continue;
+                }
+
+                if (criterion.Kind != CriterionKind.Linguistic)
+                {
+                    Add(at, criterion.Kind == CriterionKind.Numeric
+                        ? $"criterion \"{rating.Criterion}\" is numeric; give its value under $.values, not a rating"
+                        : $"criterion \"{rating.Criterion}\" is a pass/fail gate; give its result under $.gates, not a rating");
+                    continue;
+                }
+
+                if (assessor.Criteria is { } assigned && !assigned.Contains(rating.Criterion))
+                {
+                    Add(at, $"criterion \"{rating.Criterion}\" is not assigned to assessor \"{rating.Assessor}\"");
+                    continue;
+                }
+
+                if (!cells.TryAdd((rating.Assessor, rating.Alternative, rating.Criterion), rating))
+                {
+                    Add(at, "this cell is rated twice");
+                    continue;
+                }
+
+                if (rating.Term is null == rating.Declined is null)
+                {
+                    Add(at, "give either a term or a reason for declining, not both and not neither");
+                }
+                else if (rating.Term is { } term && !e.RatingScale.TryFind(term, out _))
+                {
+                    Add(at, $"unknown term \"{term}\"; the rating scale has {e.RatingScale.CodeList}");
+                }
+                else if (rating.Declined is { } reason && string.IsNullOrWhiteSpace(reason))
+                {
+                    Add(at, "a declined cell needs a reason (for example: recused, outside expertise)");
+                }
+            }
+
+            foreach (var criterion in e.Criteria.Where(c => c.Kind == CriterionKind.Linguistic))
+            {
+                foreach (var alternative in e.Alternatives.Where(a => !excluded.Contains(a.Id)))
+                {
+                    var rated = 0;
+                    var declined = new List<string>();
+                    foreach (var assessor in e.Assessors)
+                    {
+                        if (assessor.Criteria is { } assigned && !assigned.Contains(criterion.Id))
+                        {
+                            continue;
+                        }
+
+                        if (!cells.TryGetValue((assessor.Id, alternative.Id, criterion.Id), out var rating))
+                        {
+                            Add(JsonPath.Keys("$.ratings", assessor.Id, alternative.Id, criterion.Id),
+                                $"assessor \"{assessor.Id}\" has neither rated alternative \"{alternative.Id}\" on criterion \"{criterion.Id}\" nor declined it with a reason");
+                        }
+                        else if (rating.Term is not null)
+                        {
+                            rated++;
+                        }
+                        else
+                        {
+                            declined.Add($"{assessor.Id}: {rating.Declined}");
+                        }
+                    }
+
+                    if (rated == 0)
+                    {
+                        var why = declined.Count > 0 ? $" (declined by {string.Join("; ", declined)})" : " (no assessor is assigned to it)";
+                        Add(JsonPath.Keys("$.ratings.*", alternative.Id, criterion.Id),
+                            $"nobody rated alternative \"{alternative.Id}\" on criterion \"{criterion.Id}\"{why}; the analysis cannot proceed without at least one rating, and none is imputed");
+                    }
+                }
+            }
+        }
+
+        private static string Describe(CriterionKind kind) => kind switch
+        {
+            CriterionKind.Numeric => "numeric",
+            CriterionKind.Gate => "a pass/fail gate",
+            _ => "linguistic",
+        };
+
+        private static string List(IReadOnlyCollection<string> items) =>
+            items.Count <= 6 ? string.Join(", ", items) : $"{string.Join(", ", items.Take(6))} and {items.Count - 6} more";
+    }
+}

@@ -1,0 +1,129 @@
+using Decide.Core.Fuzzy;
+using Decide.Core.Scales;
+
+namespace Decide.Core.Model;
+
+/// <summary>A set of criteria that share a group weight (one level deep).</summary>
+/// <param name="Id">Unique among groups and criteria.</param>
+/// <param name="Name">Shown to people.</param>
+public sealed record CriterionGroup(string Id, string Name);
+
+/// <summary>A criterion the alternatives are judged on.</summary>
+/// <param name="Id">Unique among criteria and groups.</param>
+/// <param name="Name">Shown to people.</param>
+/// <param name="Kind">Linguistic, numeric or gate.</param>
+/// <param name="Direction">Benefit or cost (ignored for gates).</param>
+/// <param name="Group">Id of the group it belongs to, or null for a top-level criterion.</param>
+/// <param name="Descriptors">
+/// Optional: for each rating-scale term code, what that term means for this criterion (shown to assessors).
+/// </param>
+/// <param name="Unit">Optional unit of a numeric criterion ("EUR", "days").</param>
+public sealed record Criterion(
+    string Id,
+    string Name,
+    CriterionKind Kind = CriterionKind.Linguistic,
+    Direction Direction = Direction.Benefit,
+    string? Group = null,
+    IReadOnlyDictionary<string, string>? Descriptors = null,
+    string? Unit = null);
+
+/// <summary>One of the things being chosen between (a bid, a supplier, a candidate).</summary>
+public sealed record Alternative(string Id, string Name);
+
+/// <summary>A panel member who rates.</summary>
+/// <param name="Id">Unique; <c>panel</c> is reserved.</param>
+/// <param name="Name">Shown to people.</param>
+/// <param name="Weight">Relative weight of their judgement, fixed in the plan; positive; default 1.</param>
+/// <param name="Criteria">
+/// The criteria assigned to them; null means every linguistic criterion. They are expected to rate (or decline)
+/// every alternative on each assigned criterion.
+/// </param>
+public sealed record Assessor(string Id, string Name, double Weight = 1, IReadOnlyList<string>? Criteria = null);
+
+/// <summary>An assessor's importance term for a criterion or a group.</summary>
+public sealed record ImportanceRating(string Assessor, string Node, string Term);
+
+/// <summary>
+/// An assessor's judgement of how much more important <paramref name="Row"/> is than <paramref name="Col"/>;
+/// the reverse judgement is its reciprocal.
+/// </summary>
+/// <param name="Assessor">Who judged.</param>
+/// <param name="Row">Criterion or group id.</param>
+/// <param name="Col">Criterion or group id in the same matrix.</param>
+/// <param name="Value">Positive TFN: row over column.</param>
+/// <param name="Term">The pairwise-scale code the value came from, if any (kept for display).</param>
+public sealed record PairwiseJudgement(string Assessor, string Row, string Col, Tfn Value, string? Term = null);
+
+/// <summary>
+/// An assessor's rating of one alternative on one linguistic criterion: a term with its rationale, or a
+/// declined cell with the reason. Exactly one of <paramref name="Term"/> and <paramref name="Declined"/> is set.
+/// </summary>
+public sealed record Rating(
+    string Assessor,
+    string Alternative,
+    string Criterion,
+    string? Term,
+    string? Rationale = null,
+    string? Declined = null);
+
+/// <summary>A measured value of a numeric criterion.</summary>
+public sealed record NumericValue(string Alternative, string Criterion, double Value);
+
+/// <summary>The outcome of a gate (pass/fail) criterion for one alternative.</summary>
+public sealed record GateResult(string Alternative, string Criterion, bool Passed, string? Note = null);
+
+/// <summary>Choices of method fixed in the plan.</summary>
+public sealed record AnalysisOptions(AggregationRule Aggregation = AggregationRule.Mean, IdealPoints Ideal = IdealPoints.Unit);
+
+/// <summary>
+/// A whole evaluation as the engine sees it: the plan (scales, criteria, panel, weighting) and the inputs
+/// (judgements, ratings, values, gate results). The shape mirrors the portable evaluation file
+/// (docs/evaluation-format.md), so error paths name places in that file.
+/// </summary>
+public sealed record Evaluation
+{
+    /// <summary>Title of the evaluation.</summary>
+    public required string Title { get; init; }
+
+    /// <summary>Scale assessors rate linguistic criteria on.</summary>
+    public LinguisticScale RatingScale { get; init; } = BuiltInScales.ChenRating7;
+
+    /// <summary>Scale importance ratings use.</summary>
+    public LinguisticScale ImportanceScale { get; init; } = BuiltInScales.ChenImportance7;
+
+    /// <summary>Scale pairwise judgements given by code use.</summary>
+    public LinguisticScale PairwiseScale { get; init; } = BuiltInScales.Pairwise9;
+
+    /// <summary>Criterion groups (may be empty).</summary>
+    public IReadOnlyList<CriterionGroup> Groups { get; init; } = [];
+
+    /// <summary>Criteria, in the order they are shown.</summary>
+    public required IReadOnlyList<Criterion> Criteria { get; init; }
+
+    /// <summary>Alternatives, in the order they are shown.</summary>
+    public required IReadOnlyList<Alternative> Alternatives { get; init; }
+
+    /// <summary>The panel.</summary>
+    public required IReadOnlyList<Assessor> Assessors { get; init; }
+
+    /// <summary>How criterion weights are derived.</summary>
+    public WeightingMethod Weighting { get; init; } = WeightingMethod.Importance;
+
+    /// <summary>Importance ratings (used when <see cref="Weighting"/> is importance).</summary>
+    public IReadOnlyList<ImportanceRating> Importance { get; init; } = [];
+
+    /// <summary>Pairwise judgements (used when <see cref="Weighting"/> is pairwise).</summary>
+    public IReadOnlyList<PairwiseJudgement> Pairwise { get; init; } = [];
+
+    /// <summary>Ratings of linguistic criteria.</summary>
+    public IReadOnlyList<Rating> Ratings { get; init; } = [];
+
+    /// <summary>Values of numeric criteria.</summary>
+    public IReadOnlyList<NumericValue> Values { get; init; } = [];
+
+    /// <summary>Results of gate criteria.</summary>
+    public IReadOnlyList<GateResult> Gates { get; init; } = [];
+
+    /// <summary>Method choices.</summary>
+    public AnalysisOptions Options { get; init; } = new();
+}

@@ -1,0 +1,150 @@
+using Decide.Core.Aggregation;
+using Decide.Core.Analysis;
+using Decide.Core.Consistency;
+using Decide.Core.Fuzzy;
+using Decide.Core.Model;
+
+namespace Decide.Core.Weighting;
+
+/// <summary>
+/// Derives every scored criterion's fuzzy weight from the panel's importance ratings or pairwise judgements,
+/// combining group and local weights.
+/// </summary>
+/// <remarks>
+/// Groups (one level deep): a grouped criterion's weight is its group's weight ⊗ its local weight.
+/// <list type="bullet">
+/// <item>Importance: each node (group or criterion) gets the aggregated importance TFN. Within a group the local
+/// weights are divided by the sum of their centroids, so that a group's criteria share the group's weight rather
+/// than each receiving it whole; a top-level criterion keeps its aggregated importance (Chen 2000).</item>
+/// <item>Pairwise: one matrix at the top level (groups and top-level criteria) and one per group; Buckley weights
+/// of the panel's matrix (element-wise weighted geometric mean of the assessors' matrices). A matrix of one item
+/// gives it (1, 1, 1).</item>
+/// </list>
+/// See docs/methods.md §4 and docs/decisions/0004-criterion-groups.md.
+/// </remarks>
+public static class CriterionWeights
+{
+    /// <summary>The derived weights, in the order of <paramref name="scored"/>, and the consistency reports.</summary>
+    /// <param name="evaluation">A validated evaluation.</param>
+    /// <param name="scored">The scored (non-gate) criteria, in order.</param>
+    public static (CriterionWeight[] Weights, MatrixConsistency[] Consistency) Derive(
+        Evaluation evaluation, IReadOnlyList<Criterion> scored)
+    {
+        Dictionary<string, Tfn> node;
+        MatrixConsistency[] consistency;
+        if (evaluation.Weighting == WeightingMethod.Importance)
+        {
+            node = FromImportance(evaluation, scored);
+            consistency = [];
+        }
+        else
+        {
+            (node, consistency) = FromPairwise(evaluation, scored);
+        }
+
+        var fuzzy = new Tfn[scored.Count];
+        var parts = new (Tfn? Group, Tfn? Local)[scored.Count];
+        for (var j = 0; j < scored.Count; j++)
+        {
+            var c = scored[j];
+            if (c.Group is { } g)
+            {
+                var local = node[c.Id];
+                fuzzy[j] = node[g] * local;
+                parts[j] = (node[g], local);
+            }
+            else
+            {
+                fuzzy[j] = node[c.Id];
+            }
+        }
+
+        var crisp = CrispShares.FromCentroids(fuzzy);
+        var weights = new CriterionWeight[scored.Count];
+        for (var j = 0; j < scored.Count; j++)
+        {
+            weights[j] = new CriterionWeight(scored[j].Id, fuzzy[j], crisp[j], scored[j].Group, parts[j].Group, parts[j].Local);
+        }
+
+        return (weights, consistency);
+    }
+
+    private static Dictionary<string, Tfn> FromImportance(Evaluation e, IReadOnlyList<Criterion> scored)
+    {
+        var weightOf = e.Assessors.ToDictionary(a => a.Id, a => a.Weight, StringComparer.Ordinal);
+        var byNode = e.Importance.GroupBy(r => r.Node, StringComparer.Ordinal).ToDictionary(g => g.Key, g => g.ToArray(), StringComparer.Ordinal);
+        var node = new Dictionary<string, Tfn>(StringComparer.Ordinal);
+        foreach (var (id, ratings) in byNode)
+        {
+            var values = ratings.Select(r => e.ImportanceScale[Step(e, r.Term)].Value).ToArray();
+            var weights = ratings.Select(r => weightOf[r.Assessor]).ToArray();
+            node[id] = GroupAggregation.Aggregate(values, weights, e.Options.Aggregation);
+        }
+
+        foreach (var group in e.Groups)
+        {
+            var members = scored.Where(c => c.Group == group.Id).ToArray();
+            var total = members.Sum(c => node[c.Id].Centroid);
+            foreach (var c in members)
+            {
+                node[c.Id] = total > 0 ? (1 / total) * node[c.Id] : Tfn.Zero;
+            }
+        }
+
+        return node;
+    }
+
+    private static int Step(Evaluation e, string term) => e.ImportanceScale.TryFind(term, out var step)
+        ? step
+        : throw new InvalidOperationException($"Unvalidated importance term {term}.");
+
+    private static (Dictionary<string, Tfn>, MatrixConsistency[]) FromPairwise(Evaluation e, IReadOnlyList<Criterion> scored)
+    {
+        var node = new Dictionary<string, Tfn>(StringComparer.Ordinal);
+        var reports = new List<MatrixConsistency>();
+        var judges = e.Assessors.Where(a => e.Pairwise.Any(p => p.Assessor == a.Id)).ToArray();
+
+        var matrices = new List<(string? Group, string[] Items)>
+        {
+            (null, e.Groups.Select(g => g.Id).Concat(scored.Where(c => c.Group is null).Select(c => c.Id)).ToArray()),
+        };
+        matrices.AddRange(e.Groups.Select(g => ((string?)g.Id, scored.Where(c => c.Group == g.Id).Select(c => c.Id).ToArray())));
+
+        foreach (var (group, items) in matrices)
+        {
+            if (items.Length == 1)
+            {
+                node[items[0]] = Tfn.One;
+                continue;
+            }
+
+            var position = items.Select((id, i) => (id, i)).ToDictionary(x => x.id, x => x.i, StringComparer.Ordinal);
+            var individual = new List<FuzzyPairwiseMatrix>();
+            foreach (var judge in judges)
+            {
+                var matrix = new FuzzyPairwiseMatrix(items);
+                foreach (var j in e.Pairwise.Where(p => p.Assessor == judge.Id && position.ContainsKey(p.Row) && position.ContainsKey(p.Col)))
+                {
+                    matrix.Set(position[j.Row], position[j.Col], j.Value);
+                }
+
+                individual.Add(matrix);
+                reports.Add(Report(judge.Id, group, matrix));
+            }
+
+            var panel = FuzzyPairwiseMatrix.GeometricMean(individual, judges.Select(j => j.Weight).ToArray());
+            var panelReport = Report(EvaluationValidator.PanelId, group, panel);
+            reports.Add(panelReport);
+            for (var i = 0; i < items.Length; i++)
+            {
+                node[items[i]] = panelReport.Weights[i];
+            }
+        }
+
+        return (node, reports.ToArray());
+    }
+
+    /// <summary>Consistency and Buckley weights of one matrix.</summary>
+    public static MatrixConsistency Report(string assessor, string? group, FuzzyPairwiseMatrix matrix) =>
+        new(assessor, group, matrix.Items, PairwiseConsistency.Analyze(matrix.Middles(), matrix.Items), BuckleyWeights.Compute(matrix));
+}
