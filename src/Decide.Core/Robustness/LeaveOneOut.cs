@@ -1,0 +1,58 @@
+using Decide.Core.Analysis;
+using Decide.Core.Model;
+
+namespace Decide.Core.Robustness;
+
+/// <summary>
+/// Re-ranks without each assessor in turn, to show whether one person's judgements decide the winner.
+/// </summary>
+/// <remarks>
+/// The assessor's ratings, importance ratings and pairwise judgements are all removed and the whole analysis is
+/// re-run (validation included), so weights are re-derived from the remaining panel. When that is impossible
+/// (a cell only they rated, the only one who gave weights) the entry says why instead of imputing.
+/// </remarks>
+public static class LeaveOneOut
+{
+    /// <summary>One entry per assessor, in panel order.</summary>
+    public static IReadOnlyList<LeaveOneOutResult> Run(PreparedEvaluation prepared, AnalysisResult baseResult)
+    {
+        var source = prepared.Source;
+        var winners = Winners(baseResult);
+        var results = new List<LeaveOneOutResult>();
+        foreach (var assessor in source.Assessors)
+        {
+            if (source.Assessors.Count == 1)
+            {
+                results.Add(new LeaveOneOutResult(assessor.Id, null, [], false, "the only assessor: without them there is no panel"));
+                continue;
+            }
+
+            var without = Without(source, assessor.Id);
+            try
+            {
+                var result = DecisionEngine.Analyze(without);
+                var ranking = result.Ranking.Select(r => r.Alternative).ToArray();
+                results.Add(new LeaveOneOutResult(assessor.Id, ranking.FirstOrDefault(), ranking, !winners.SetEquals(Winners(result))));
+            }
+            catch (InvalidEvaluationException e)
+            {
+                var reasons = string.Join("; ", e.Errors.Take(3).Select(x => x.Reason));
+                results.Add(new LeaveOneOutResult(assessor.Id, null, [], false, $"no ranking without this assessor: {reasons}"));
+            }
+        }
+
+        return results;
+    }
+
+    /// <summary>The evaluation with every judgement of one assessor removed.</summary>
+    public static Evaluation Without(Evaluation source, string assessor) => source with
+    {
+        Assessors = source.Assessors.Where(a => a.Id != assessor).ToArray(),
+        Ratings = source.Ratings.Where(r => r.Assessor != assessor).ToArray(),
+        Importance = source.Importance.Where(r => r.Assessor != assessor).ToArray(),
+        Pairwise = source.Pairwise.Where(p => p.Assessor != assessor).ToArray(),
+    };
+
+    private static HashSet<string> Winners(AnalysisResult result) =>
+        result.Ranking.Where(r => r.Rank == 1).Select(r => r.Alternative).ToHashSet(StringComparer.Ordinal);
+}
