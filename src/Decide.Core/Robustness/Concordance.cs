@@ -8,7 +8,8 @@ namespace Decide.Core.Robustness;
 /// Corrected for ties.
 /// </param>
 /// <param name="ChiSquare">χ² = m(n − 1)W, approximately chi-square distributed with n − 1 degrees of freedom when
-/// the rankings are independent (a fair approximation from about n ≥ 7; for fewer objects read it as a guide).</param>
+/// the rankings are independent. With few objects the approximation is rough (common practice uses it from about
+/// seven objects and exact tables below that), so with a handful of bids read the p-value as a guide.</param>
 /// <param name="DegreesOfFreedom">n − 1.</param>
 /// <param name="PValue">P(χ²ₙ₋₁ ≥ <paramref name="ChiSquare"/>): the chance of agreement at least this strong among
 /// rankings made independently at random. Small means the agreement is not chance.</param>
