@@ -48,6 +48,11 @@ public static class EvaluationValidator
             }
 
             Structure();
+            if (e.Options.DivergenceTolerance < 0)
+            {
+                Add("$.options.divergenceTolerance", $"the divergence tolerance is a number of scale steps, 0 or more; got {e.Options.DivergenceTolerance}");
+            }
+
             var excluded = Gates();
             switch (e.Weighting)
             {

@@ -52,3 +52,13 @@ public enum IdealPoints
     /// <summary>Per criterion, the largest upper value and the smallest lower value of the weighted matrix, as crisp points.</summary>
     Extreme,
 }
+
+/// <summary>Where the weights of the Monte Carlo draws come from.</summary>
+public enum AcceptabilityWeights
+{
+    /// <summary>Each criterion's weight drawn from the triangular distribution on its aggregated fuzzy weight.</summary>
+    Fuzzy,
+
+    /// <summary>"No weight information": weight vectors uniform on the simplex.</summary>
+    Uniform,
+}

@@ -73,7 +73,21 @@ public sealed record NumericValue(string Alternative, string Criterion, double V
 public sealed record GateResult(string Alternative, string Criterion, bool Passed, string? Note = null);
 
 /// <summary>Choices of method fixed in the plan.</summary>
-public sealed record AnalysisOptions(AggregationRule Aggregation = AggregationRule.Mean, IdealPoints Ideal = IdealPoints.Unit);
+/// <param name="Aggregation">How assessors' TFNs are combined.</param>
+/// <param name="Ideal">Ideal points of fuzzy TOPSIS.</param>
+/// <param name="DivergenceTolerance">
+/// Largest spread of one cell's terms, in scale steps, that needs no discussion; cells above it are listed for
+/// moderation. Default 2.
+/// </param>
+/// <param name="AcceptabilityWeights">
+/// Where the weights of rank-acceptability draws come from: the panel's fuzzy weights (default) or, when the panel
+/// chooses "no weight information", uniformly from all weight vectors.
+/// </param>
+public sealed record AnalysisOptions(
+    AggregationRule Aggregation = AggregationRule.Mean,
+    IdealPoints Ideal = IdealPoints.Unit,
+    int DivergenceTolerance = 2,
+    AcceptabilityWeights AcceptabilityWeights = AcceptabilityWeights.Fuzzy);
 
 /// <summary>
 /// A whole evaluation as the engine sees it: the plan (scales, criteria, panel, weighting) and the inputs

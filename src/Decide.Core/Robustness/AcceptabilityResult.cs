@@ -1,14 +1,6 @@
+using Decide.Core.Model;
+
 namespace Decide.Core.Robustness;
-
-/// <summary>Where the weights of the Monte Carlo draws come from.</summary>
-public enum AcceptabilityWeights
-{
-    /// <summary>Each criterion's weight drawn from the triangular distribution on its aggregated fuzzy weight.</summary>
-    Fuzzy,
-
-    /// <summary>"No weight information": weight vectors uniform on the simplex.</summary>
-    Uniform,
-}
 
 /// <summary>Rank acceptability of every alternative (SMAA-2 rank acceptability indices).</summary>
 /// <param name="Draws">Number of Monte Carlo draws.</param>

@@ -39,12 +39,12 @@ public static class CriticalChanges
                         .FirstOrDefault();
                     if (closest is null)
                     {
-                        changes.Add(new CriticalChange(sweep.Criterion, leader, challenger, null, null, null));
+                        changes.Add(new CriticalChange(sweep.Criterion, leader, challenger, sweep.Current, null, null, null));
                     }
                     else
                     {
                         var delta = Math.Abs(closest.Weight - sweep.Current);
-                        changes.Add(new CriticalChange(sweep.Criterion, leader, challenger, closest.Weight, delta, delta / sweep.Current * 100));
+                        changes.Add(new CriticalChange(sweep.Criterion, leader, challenger, sweep.Current, closest.Weight, delta, delta / sweep.Current * 100));
                     }
                 }
             }
@@ -66,6 +66,6 @@ public static class CriticalChanges
         var best = candidates.OrderBy(by).FirstOrDefault();
         return best is null
             ? null
-            : new MostCriticalCriterion(best.Criterion, best.Leader, best.Challenger, best.Absolute!.Value, best.Relative!.Value, best.Weight!.Value);
+            : new MostCriticalCriterion(best.Criterion, best.Leader, best.Challenger, best.Current, best.Absolute!.Value, best.Relative!.Value, best.Weight!.Value);
     }
 }

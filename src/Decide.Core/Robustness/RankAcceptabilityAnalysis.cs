@@ -1,5 +1,6 @@
 using Decide.Core.Analysis;
 using Decide.Core.Fuzzy;
+using Decide.Core.Model;
 using Decide.Core.Ranking;
 
 namespace Decide.Core.Robustness;

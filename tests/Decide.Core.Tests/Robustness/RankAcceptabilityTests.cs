@@ -1,4 +1,5 @@
 using Decide.Core.Analysis;
+using Decide.Core.Model;
 using Decide.Core.Robustness;
 
 namespace Decide.Core.Tests.Robustness;
