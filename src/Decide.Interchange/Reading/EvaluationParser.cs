@@ -205,6 +205,7 @@ internal sealed class EvaluationParser
         if (!kindReadable)
         {
             _uncertainCriteria.Add(id);
+            _in.Cover(f.MemberPath("direction")); // the direction rules depend on the kind
         }
 
         var direction = f.Choice("direction", Directions, Direction.Benefit, out _);
@@ -365,16 +366,26 @@ internal sealed class EvaluationParser
                 var before = _in.ErrorCount;
                 var f = _in.Fields(cell.Value, cell.Path, RatingMembers)!;
                 var rating = new Rating(assessor, alternative, cell.Name, f.String("term"), f.String("rationale"), f.String("declined"));
-                if (_in.ErrorCount > before)
+                if (_in.ErrorCount > before && rating is { Term: null, Declined: null })
                 {
-                    _in.Cover(cell.Path);
+                    CoverCell(alternative, cell);
                 }
 
                 return rating;
             default:
                 _in.WrongType(cell.Value, cell.Path, "a term (string), {\"term\", \"rationale\"} or {\"declined\": reason}");
+                CoverCell(alternative, cell);
                 return null;
         }
+    }
+
+    /// <summary>
+    /// A rating that could not be read: the engine's "not rated" and "nobody rated" for that cell follow from it.
+    /// </summary>
+    private void CoverCell(string alternative, JsonMember cell)
+    {
+        _in.Cover(cell.Path);
+        _in.Cover(JsonPath.Keys("$.ratings.*", alternative, cell.Name));
     }
 
     private List<NumericValue> Values(JsonFields top)
