@@ -4,7 +4,6 @@ using System.Text.Encodings.Web;
 using System.Text.Json;
 using Decide.Core.Analysis;
 using Decide.Core.Consistency;
-using Decide.Core.Fuzzy;
 using Decide.Core.Model;
 using Decide.Interchange.Results;
 

@@ -1,4 +1,3 @@
-using System.Text.Json;
 using Decide.Core;
 using Decide.Core.Fuzzy;
 
