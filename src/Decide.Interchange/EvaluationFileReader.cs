@@ -1,0 +1,84 @@
+using System.Text.Json;
+using System.Text.RegularExpressions;
+using Decide.Core;
+using Decide.Interchange.Reading;
+
+namespace Decide.Interchange;
+
+/// <summary>
+/// Reads a portable evaluation file (<c>decide-evaluation/1</c>, docs/evaluation-format.md) into the engine's
+/// model and its metadata, and checks it with the engine's validator.
+/// </summary>
+/// <remarks>
+/// Every problem is reported, not just the first, each as an <see cref="EvaluationError"/> whose path points into
+/// the file (<c>$.ratings.E1.S2.quality</c>): malformed JSON (with line and column), a value of the wrong JSON type,
+/// an unknown member name, a name given twice in one object, a scale that breaks a rule, and everything the
+/// engine's <see cref="Decide.Core.Analysis.EvaluationValidator"/> finds (unknown ids and terms, missing ratings,
+/// inconsistent plans). A file that reads without error can be analysed.
+/// </remarks>
+public static partial class EvaluationFileReader
+{
+    private static readonly JsonDocumentOptions Options = new()
+    {
+        AllowTrailingCommas = false,
+        CommentHandling = JsonCommentHandling.Disallow,
+        MaxDepth = 64,
+    };
+
+    /// <summary>Reads an evaluation from JSON text.</summary>
+    /// <exception cref="InvalidEvaluationException">The text is not a valid evaluation; every problem is listed.</exception>
+    public static EvaluationFile Read(string json)
+    {
+        ArgumentNullException.ThrowIfNull(json);
+        using var document = Parse(() => JsonDocument.Parse(json, Options));
+        return EvaluationParser.Parse(document.RootElement);
+    }
+
+    /// <summary>Reads an evaluation from UTF-8 bytes (a leading byte-order mark is allowed).</summary>
+    /// <exception cref="InvalidEvaluationException">The bytes are not a valid evaluation; every problem is listed.</exception>
+    public static EvaluationFile Read(ReadOnlyMemory<byte> utf8Json)
+    {
+        var bytes = utf8Json.Span.StartsWith((ReadOnlySpan<byte>)[0xEF, 0xBB, 0xBF]) ? utf8Json[3..] : utf8Json;
+        using var document = Parse(() => JsonDocument.Parse(bytes, Options));
+        return EvaluationParser.Parse(document.RootElement);
+    }
+
+    /// <summary>Reads an evaluation from a stream of UTF-8 JSON, to its end.</summary>
+    /// <exception cref="InvalidEvaluationException">The content is not a valid evaluation; every problem is listed.</exception>
+    /// <exception cref="IOException">The stream cannot be read.</exception>
+    public static EvaluationFile Read(Stream stream)
+    {
+        ArgumentNullException.ThrowIfNull(stream);
+        using var buffer = new MemoryStream();
+        stream.CopyTo(buffer);
+        return Read(new ReadOnlyMemory<byte>(buffer.GetBuffer(), 0, (int)buffer.Length));
+    }
+
+    /// <summary>Reads an evaluation file.</summary>
+    /// <exception cref="InvalidEvaluationException">The file is not a valid evaluation; every problem is listed.</exception>
+    /// <exception cref="IOException">The file cannot be read (for example <see cref="FileNotFoundException"/>).</exception>
+    /// <exception cref="UnauthorizedAccessException">The file may not be read, or the path is a folder.</exception>
+    public static EvaluationFile ReadFile(string path)
+    {
+        ArgumentNullException.ThrowIfNull(path);
+        return Read(File.ReadAllBytes(path));
+    }
+
+    private static JsonDocument Parse(Func<JsonDocument> parse)
+    {
+        try
+        {
+            return parse();
+        }
+        catch (JsonException ex)
+        {
+            var line = (ex.LineNumber ?? 0) + 1;
+            var column = (ex.BytePositionInLine ?? 0) + 1;
+            var reason = ReadContext.Sentence(PositionSuffix().Replace(ex.Message, "").Replace(" Change the reader options.", "", StringComparison.Ordinal));
+            throw new InvalidEvaluationException(JsonPath.Root, $"not valid JSON at line {line}, column {column}: {reason}");
+        }
+    }
+
+    [GeneratedRegex(@"\s*(Path: \S*\s*\|\s*)?LineNumber: \d+ \| BytePositionInLine: \d+\.?\s*$")]
+    private static partial Regex PositionSuffix();
+}

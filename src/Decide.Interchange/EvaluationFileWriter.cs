@@ -1,0 +1,380 @@
+using System.Text;
+using System.Text.Encodings.Web;
+using System.Text.Json;
+using Decide.Core.Fuzzy;
+using Decide.Core.Model;
+using Decide.Core.Scales;
+
+namespace Decide.Interchange;
+
+/// <summary>
+/// Writes an evaluation and its metadata as a portable evaluation file (<c>decide-evaluation/1</c>): indented
+/// UTF-8 JSON that <see cref="EvaluationFileReader"/> reads back to the same content.
+/// </summary>
+/// <remarks>
+/// The writer does not validate: a draft that cannot be analysed yet is written as it is, and the reader reports
+/// its problems. Built-in scales are written by name; a pairwise judgement keeps its scale code when the code still
+/// stands for the judgement's value. Ratings, importance ratings, judgements, values and gate results are grouped
+/// by assessor (or alternative) in the order they first appear. Extension members (<c>x-…</c>) of a file that was
+/// read are not kept.
+/// </remarks>
+public static class EvaluationFileWriter
+{
+    private static readonly JsonWriterOptions WriterOptions = new()
+    {
+        Indented = true,
+        Encoder = JavaScriptEncoder.UnsafeRelaxedJsonEscaping,
+    };
+
+    /// <summary>The file as a JSON string.</summary>
+    public static string ToJson(EvaluationFile file)
+    {
+        using var buffer = new MemoryStream();
+        Write(file, buffer);
+        return Encoding.UTF8.GetString(buffer.GetBuffer(), 0, (int)buffer.Length);
+    }
+
+    /// <summary>An evaluation (with optional metadata) as a JSON string.</summary>
+    public static string ToJson(Evaluation evaluation, EvaluationMetadata? metadata = null) =>
+        ToJson(new EvaluationFile(evaluation, metadata ?? EvaluationMetadata.None));
+
+    /// <summary>Writes the file to a stream as UTF-8 JSON (no byte-order mark).</summary>
+    public static void Write(EvaluationFile file, Stream stream)
+    {
+        ArgumentNullException.ThrowIfNull(file);
+        ArgumentNullException.ThrowIfNull(stream);
+        using var writer = new Utf8JsonWriter(stream, WriterOptions);
+        Write(writer, file.Evaluation, file.Metadata);
+        writer.Flush();
+        stream.WriteByte((byte)'\n');
+    }
+
+    /// <summary>Writes the file to <paramref name="path"/>, replacing what is there.</summary>
+    public static void WriteFile(EvaluationFile file, string path)
+    {
+        using var stream = File.Create(path);
+        Write(file, stream);
+    }
+
+    private static void Write(Utf8JsonWriter w, Evaluation e, EvaluationMetadata m)
+    {
+        w.WriteStartObject();
+        w.WriteString("format", EvaluationFormat.Evaluation);
+        w.WriteString("title", e.Title);
+        WriteOptional(w, "reference", m.Reference);
+        WriteOptional(w, "organisation", m.Organisation);
+        WriteOptional(w, "description", m.Description);
+        WriteOptional(w, "noun", m.Noun);
+
+        WriteScale(w, "ratingScale", e.RatingScale);
+        WriteScale(w, "importanceScale", e.ImportanceScale);
+        if (e.Weighting == WeightingMethod.Pairwise || !EvaluationFormat.SameContent(e.PairwiseScale, BuiltInScales.Pairwise9))
+        {
+            WriteScale(w, "pairwiseScale", e.PairwiseScale);
+        }
+
+        if (e.Groups.Count > 0)
+        {
+            w.WriteStartArray("groups");
+            foreach (var group in e.Groups)
+            {
+                w.WriteStartObject();
+                w.WriteString("id", group.Id);
+                w.WriteString("name", group.Name);
+                w.WriteEndObject();
+            }
+
+            w.WriteEndArray();
+        }
+
+        w.WriteStartArray("criteria");
+        foreach (var criterion in e.Criteria)
+        {
+            WriteCriterion(w, criterion, m.DescriptionOf(criterion.Id));
+        }
+
+        w.WriteEndArray();
+
+        w.WriteStartArray("alternatives");
+        foreach (var alternative in e.Alternatives)
+        {
+            w.WriteStartObject();
+            w.WriteString("id", alternative.Id);
+            w.WriteString("name", alternative.Name);
+            w.WriteEndObject();
+        }
+
+        w.WriteEndArray();
+
+        w.WriteStartArray("assessors");
+        foreach (var assessor in e.Assessors)
+        {
+            WriteAssessor(w, assessor);
+        }
+
+        w.WriteEndArray();
+
+        w.WriteString("weighting", e.Weighting == WeightingMethod.Pairwise ? "pairwise" : "importance");
+        WriteImportance(w, e.Importance);
+        WritePairwise(w, e.Pairwise, e.PairwiseScale);
+        WriteRatings(w, e.Ratings);
+        WriteValues(w, e.Values);
+        WriteGates(w, e.Gates);
+
+        w.WriteStartObject("options");
+        w.WriteString("aggregation", e.Options.Aggregation == AggregationRule.Geometric ? "geometric" : "mean");
+        w.WriteString("ideal", e.Options.Ideal == IdealPoints.Extreme ? "extreme" : "unit");
+        w.WriteEndObject();
+        w.WriteEndObject();
+    }
+
+    private static void WriteOptional(Utf8JsonWriter w, string name, string? value)
+    {
+        if (value is not null)
+        {
+            w.WriteString(name, value);
+        }
+    }
+
+    private static void WriteScale(Utf8JsonWriter w, string name, LinguisticScale scale)
+    {
+        if (EvaluationFormat.IsBuiltIn(scale))
+        {
+            w.WriteString(name, scale.Name);
+            return;
+        }
+
+        w.WriteStartObject(name);
+        w.WriteString("name", scale.Name);
+        w.WriteStartArray("range");
+        w.WriteNumberValue(scale.Minimum);
+        w.WriteNumberValue(scale.Maximum);
+        w.WriteEndArray();
+        w.WriteStartArray("terms");
+        foreach (var term in scale.Terms)
+        {
+            w.WriteStartObject();
+            w.WriteString("code", term.Code);
+            w.WriteString("label", term.Label);
+            WriteTfn(w, "tfn", term.Value);
+            WriteOptional(w, "descriptor", term.Descriptor);
+            w.WriteEndObject();
+        }
+
+        w.WriteEndArray();
+        w.WriteEndObject();
+    }
+
+    private static void WriteTfn(Utf8JsonWriter w, string name, Tfn value)
+    {
+        w.WriteStartArray(name);
+        w.WriteNumberValue(value.Lower);
+        w.WriteNumberValue(value.Middle);
+        w.WriteNumberValue(value.Upper);
+        w.WriteEndArray();
+    }
+
+    private static void WriteCriterion(Utf8JsonWriter w, Criterion c, string? description)
+    {
+        w.WriteStartObject();
+        w.WriteString("id", c.Id);
+        w.WriteString("name", c.Name);
+        w.WriteString("kind", c.Kind switch
+        {
+            CriterionKind.Numeric => "numeric",
+            CriterionKind.Gate => "gate",
+            _ => "linguistic",
+        });
+        if (c.Kind != CriterionKind.Gate || c.Direction != Direction.Benefit)
+        {
+            w.WriteString("direction", c.Direction == Direction.Cost ? "cost" : "benefit");
+        }
+
+        WriteOptional(w, "group", c.Group);
+        WriteOptional(w, "unit", c.Unit);
+        WriteOptional(w, "description", description);
+        if (c.Descriptors is { Count: > 0 } descriptors)
+        {
+            w.WriteStartObject("descriptors");
+            foreach (var (code, text) in descriptors)
+            {
+                w.WriteString(code, text);
+            }
+
+            w.WriteEndObject();
+        }
+
+        w.WriteEndObject();
+    }
+
+    private static void WriteAssessor(Utf8JsonWriter w, Assessor a)
+    {
+        w.WriteStartObject();
+        w.WriteString("id", a.Id);
+        w.WriteString("name", a.Name);
+        if (a.Weight != 1)
+        {
+            w.WriteNumber("weight", a.Weight);
+        }
+
+        if (a.Criteria is { } assigned)
+        {
+            w.WriteStartArray("criteria");
+            foreach (var id in assigned)
+            {
+                w.WriteStringValue(id);
+            }
+
+            w.WriteEndArray();
+        }
+
+        w.WriteEndObject();
+    }
+
+    private static void WriteImportance(Utf8JsonWriter w, IReadOnlyList<ImportanceRating> importance)
+    {
+        if (importance.Count == 0)
+        {
+            return;
+        }
+
+        w.WriteStartObject("importance");
+        foreach (var byAssessor in importance.GroupBy(r => r.Assessor, StringComparer.Ordinal))
+        {
+            w.WriteStartObject(byAssessor.Key);
+            foreach (var rating in byAssessor)
+            {
+                w.WriteString(rating.Node, rating.Term);
+            }
+
+            w.WriteEndObject();
+        }
+
+        w.WriteEndObject();
+    }
+
+    private static void WritePairwise(Utf8JsonWriter w, IReadOnlyList<PairwiseJudgement> pairwise, LinguisticScale scale)
+    {
+        if (pairwise.Count == 0)
+        {
+            return;
+        }
+
+        w.WriteStartObject("pairwise");
+        foreach (var byAssessor in pairwise.GroupBy(j => j.Assessor, StringComparer.Ordinal))
+        {
+            w.WriteStartArray(byAssessor.Key);
+            foreach (var judgement in byAssessor)
+            {
+                w.WriteStartObject();
+                w.WriteString("row", judgement.Row);
+                w.WriteString("col", judgement.Col);
+                if (judgement.Term is { } code && scale.TryFind(code, out var step) && scale[step].Value == judgement.Value)
+                {
+                    w.WriteString("term", code);
+                }
+                else
+                {
+                    WriteTfn(w, "tfn", judgement.Value);
+                }
+
+                w.WriteEndObject();
+            }
+
+            w.WriteEndArray();
+        }
+
+        w.WriteEndObject();
+    }
+
+    private static void WriteRatings(Utf8JsonWriter w, IReadOnlyList<Rating> ratings)
+    {
+        if (ratings.Count == 0)
+        {
+            return;
+        }
+
+        w.WriteStartObject("ratings");
+        foreach (var byAssessor in ratings.GroupBy(r => r.Assessor, StringComparer.Ordinal))
+        {
+            w.WriteStartObject(byAssessor.Key);
+            foreach (var byAlternative in byAssessor.GroupBy(r => r.Alternative, StringComparer.Ordinal))
+            {
+                w.WriteStartObject(byAlternative.Key);
+                foreach (var rating in byAlternative)
+                {
+                    if (rating is { Term: { } term, Rationale: null, Declined: null })
+                    {
+                        w.WriteString(rating.Criterion, term);
+                        continue;
+                    }
+
+                    w.WriteStartObject(rating.Criterion);
+                    WriteOptional(w, "term", rating.Term);
+                    WriteOptional(w, "declined", rating.Declined);
+                    WriteOptional(w, "rationale", rating.Rationale);
+                    w.WriteEndObject();
+                }
+
+                w.WriteEndObject();
+            }
+
+            w.WriteEndObject();
+        }
+
+        w.WriteEndObject();
+    }
+
+    private static void WriteValues(Utf8JsonWriter w, IReadOnlyList<NumericValue> values)
+    {
+        if (values.Count == 0)
+        {
+            return;
+        }
+
+        w.WriteStartObject("values");
+        foreach (var byAlternative in values.GroupBy(v => v.Alternative, StringComparer.Ordinal))
+        {
+            w.WriteStartObject(byAlternative.Key);
+            foreach (var value in byAlternative)
+            {
+                w.WriteNumber(value.Criterion, value.Value);
+            }
+
+            w.WriteEndObject();
+        }
+
+        w.WriteEndObject();
+    }
+
+    private static void WriteGates(Utf8JsonWriter w, IReadOnlyList<GateResult> gates)
+    {
+        if (gates.Count == 0)
+        {
+            return;
+        }
+
+        w.WriteStartObject("gates");
+        foreach (var byAlternative in gates.GroupBy(g => g.Alternative, StringComparer.Ordinal))
+        {
+            w.WriteStartObject(byAlternative.Key);
+            foreach (var gate in byAlternative)
+            {
+                if (gate.Note is null)
+                {
+                    w.WriteBoolean(gate.Criterion, gate.Passed);
+                    continue;
+                }
+
+                w.WriteStartObject(gate.Criterion);
+                w.WriteBoolean("passed", gate.Passed);
+                w.WriteString("note", gate.Note);
+                w.WriteEndObject();
+            }
+
+            w.WriteEndObject();
+        }
+
+        w.WriteEndObject();
+    }
+}

@@ -1,0 +1,109 @@
+using System.Reflection;
+using System.Text;
+using System.Text.Encodings.Web;
+using System.Text.Json;
+using Decide.Core.Analysis;
+using Decide.Core.Consistency;
+using Decide.Core.Model;
+using Decide.Interchange.Results;
+
+namespace Decide.Interchange;
+
+/// <summary>
+/// Turns the engine's <see cref="AnalysisResult"/> into the results document (<c>decide-results/1</c>): indented
+/// JSON, camelCase member names, invariant culture, numbers written so they read back to the same double.
+/// </summary>
+/// <remarks>
+/// Build the document with <see cref="CreateDocument"/>, add later sections with <c>with { … }</c>, and write it
+/// with <see cref="ToJson(ResultsDocument)"/> or <see cref="Write"/>.
+/// </remarks>
+public static class ResultsWriter
+{
+    private static readonly ResultsJsonContext Context = new(new JsonSerializerOptions(ResultsJsonContext.Default.Options)
+    {
+        Encoder = JavaScriptEncoder.UnsafeRelaxedJsonEscaping,
+    });
+
+    /// <summary>The engine's version as recorded in results: Decide.Core's informational version.</summary>
+    public static string EngineVersion { get; } =
+        typeof(DecisionEngine).Assembly.GetCustomAttribute<AssemblyInformationalVersionAttribute>()?.InformationalVersion
+        ?? typeof(DecisionEngine).Assembly.GetName().Version?.ToString()
+        ?? "unknown";
+
+    /// <summary>The results document for <paramref name="result"/>, with names taken from <paramref name="evaluation"/>.</summary>
+    public static ResultsDocument CreateDocument(AnalysisResult result, Evaluation evaluation)
+    {
+        ArgumentNullException.ThrowIfNull(result);
+        ArgumentNullException.ThrowIfNull(evaluation);
+        var alternativeNames = Names(evaluation.Alternatives.Select(a => (a.Id, a.Name)));
+        var criterionNames = Names(evaluation.Criteria.Select(c => (c.Id, c.Name)));
+        string AlternativeName(string id) => alternativeNames.GetValueOrDefault(id, id);
+        string CriterionName(string id) => criterionNames.GetValueOrDefault(id, id);
+
+        return new ResultsDocument
+        {
+            Title = result.Title,
+            Engine = new EngineDescription("Decide", EngineVersion),
+            Method = new MethodDescription(
+                Name(result.Weighting),
+                result.Options.Aggregation == AggregationRule.Geometric ? "geometric" : "mean",
+                result.Options.Ideal == IdealPoints.Extreme ? "extreme" : "unit",
+                result.Weighting == WeightingMethod.Pairwise ? RandomIndex.TableName : null),
+            Ranking = result.Ranking.Select(r => new RankingEntry(
+                r.Alternative, AlternativeName(r.Alternative), r.Rank, r.Closeness, r.DPlus, r.DMinus,
+                r.Contributions.Select(c => new ContributionEntry(c.Criterion, c.DPlus, c.DMinus)).ToArray())).ToArray(),
+            Excluded = result.Excluded.Select(x => new ExcludedEntry(x.Alternative, AlternativeName(x.Alternative), x.Gates.ToArray())).ToArray(),
+            Weights = result.Weights.Select(w => new WeightEntry(
+                w.Criterion, CriterionName(w.Criterion), w.Fuzzy.ToArray(), w.Crisp, w.Group,
+                w.GroupWeight?.ToArray(), w.Local?.ToArray())).ToArray(),
+            Consistency = result.Consistency.Select(Consistency).ToArray(),
+            Matrix = result.Matrix.Select(m => new MatrixEntry(
+                m.Alternative, m.Criterion, m.Aggregated.ToArray(), m.Weighted.ToArray(), m.Raters,
+                m.Declined.Select(d => new DeclinedEntry(d.Assessor, d.Reason)).ToArray())).ToArray(),
+        };
+    }
+
+    /// <summary>The results document for an analysis as JSON text.</summary>
+    public static string ToJson(AnalysisResult result, Evaluation evaluation) => ToJson(CreateDocument(result, evaluation));
+
+    /// <summary>A results document as JSON text (ending with a line break).</summary>
+    public static string ToJson(ResultsDocument document)
+    {
+        using var buffer = new MemoryStream();
+        Write(document, buffer);
+        return Encoding.UTF8.GetString(buffer.GetBuffer(), 0, (int)buffer.Length);
+    }
+
+    /// <summary>Writes a results document to a stream as UTF-8 JSON (no byte-order mark), ending with a line break.</summary>
+    public static void Write(ResultsDocument document, Stream stream)
+    {
+        ArgumentNullException.ThrowIfNull(document);
+        ArgumentNullException.ThrowIfNull(stream);
+        JsonSerializer.Serialize(stream, document, Context.ResultsDocument);
+        stream.WriteByte((byte)'\n');
+    }
+
+    private static ConsistencyEntry Consistency(MatrixConsistency m)
+    {
+        var r = m.Report;
+        return new ConsistencyEntry(
+            m.Assessor, m.Group, m.Items.ToArray(), r.Size, r.LambdaMax, r.ConsistencyIndex, r.RandomIndex,
+            r.RandomIndexTable, r.Ratio, r.Threshold, r.Acceptable, r.Gci, r.GciThreshold, r.GciAcceptable,
+            m.Weights.Select(w => (IReadOnlyList<double>)w.ToArray()).ToArray(),
+            r.WorstJudgements.Select(j => new JudgementEntry(j.Row, j.Col, j.Given, j.Consistent)).ToArray(),
+            r.IntransitiveTriads.Select(t => (IReadOnlyList<string>)t.ToArray()).ToArray());
+    }
+
+    private static string Name(WeightingMethod weighting) => weighting == WeightingMethod.Pairwise ? "pairwise" : "importance";
+
+    private static Dictionary<string, string> Names(IEnumerable<(string Id, string Name)> items)
+    {
+        var names = new Dictionary<string, string>(StringComparer.Ordinal);
+        foreach (var (id, name) in items)
+        {
+            names.TryAdd(id, name);
+        }
+
+        return names;
+    }
+}

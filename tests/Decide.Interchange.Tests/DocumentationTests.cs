@@ -1,0 +1,34 @@
+using System.Text.Json.Nodes;
+using System.Text.RegularExpressions;
+
+namespace Decide.Interchange.Tests;
+
+/// <summary>docs/evaluation-format.md stays in step with the example file and the schemas.</summary>
+public sealed partial class DocumentationTests
+{
+    private static string Document => File.ReadAllText(RepositoryFiles.PathOf("docs", "evaluation-format.md"));
+
+    [Fact]
+    public void The_annotated_example_is_the_minimal_example_file()
+    {
+        var section = Document[Document.IndexOf("## Annotated example", StringComparison.Ordinal)..];
+        var block = JsonBlock().Match(section);
+
+        Assert.True(block.Success, "no JSON block under \"Annotated example\"");
+        Assert.True(JsonNode.DeepEquals(JsonNode.Parse(block.Groups[1].Value), JsonNode.Parse(Files.MinimalText)),
+            "the example in the document differs from docs/examples/minimal.json");
+    }
+
+    [Theory]
+    [InlineData("decide-evaluation-1.schema.json")]
+    [InlineData("decide-results-1.schema.json")]
+    public void Every_top_level_member_of_a_schema_is_documented(string schema)
+    {
+        var members = JsonNode.Parse(File.ReadAllText(RepositoryFiles.PathOf("docs", "schema", schema)))!["properties"]!.AsObject();
+
+        Assert.All(members.Select(m => m.Key), name => Assert.Contains($"`{name}`", Document));
+    }
+
+    [GeneratedRegex("```json\\n(.*?)\\n```", RegexOptions.Singleline)]
+    private static partial Regex JsonBlock();
+}

@@ -1,0 +1,25 @@
+namespace Decide.Interchange.Tests;
+
+/// <summary>Finds files of the repository from the test's output folder.</summary>
+internal static class RepositoryFiles
+{
+    /// <summary>The folder holding Decide.sln, found by walking up from the test binaries.</summary>
+    public static string Root { get; } = FindRoot();
+
+    public static string PathOf(params string[] parts) => Path.Combine([Root, .. parts]);
+
+    public static string MinimalExample => PathOf("docs", "examples", "minimal.json");
+
+    private static string FindRoot()
+    {
+        for (var dir = new DirectoryInfo(AppContext.BaseDirectory); dir is not null; dir = dir.Parent)
+        {
+            if (File.Exists(Path.Combine(dir.FullName, "Decide.sln")))
+            {
+                return dir.FullName;
+            }
+        }
+
+        throw new InvalidOperationException($"No folder above {AppContext.BaseDirectory} holds Decide.sln.");
+    }
+}
