@@ -38,6 +38,15 @@ public sealed class TfnMeasureTests
         Assert.Equal((6.0, 6.0), a.AlphaCut(1));
     }
 
+    [Fact]
+    public void Alpha_cut_at_one_is_exactly_the_peak_even_when_subtraction_rounds()
+    {
+        // Found by TfnPropertyTests: l + 1·(m − l) gives 330.87800000000004 here, a 1-cut without its own peak.
+        var a = new Tfn(-128.924, 330.878, 965.158);
+        Assert.Equal((330.878, 330.878), a.AlphaCut(1));
+        Assert.Equal(1, a.Membership(a.AlphaCut(1).Low));
+    }
+
     [Theory]
     [InlineData(-0.1)]
     [InlineData(1.1)]

@@ -29,6 +29,9 @@ public sealed class TfnPropertyTests
     }
 
     [Property]
+    public bool Alpha_cut_at_one_is_the_peak(Tfn a) => a.AlphaCut(1) == (a.Middle, a.Middle);
+
+    [Property]
     public bool Alpha_cut_at_zero_is_the_support(Tfn a) => a.AlphaCut(0) == (a.Lower, a.Upper);
 
     [Property]
