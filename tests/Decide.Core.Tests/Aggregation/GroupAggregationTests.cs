@@ -83,8 +83,8 @@ public sealed class GroupAggregationTests
 
     private static void AssertTfn(Tfn expected, Tfn actual)
     {
-        Assert.Equal(expected.Lower, actual.Lower, 12);
-        Assert.Equal(expected.Middle, actual.Middle, 12);
-        Assert.Equal(expected.Upper, actual.Upper, 12);
+        Assert.Equal(expected.Lower, actual.Lower, 1e-12);
+        Assert.Equal(expected.Middle, actual.Middle, 1e-12);
+        Assert.Equal(expected.Upper, actual.Upper, 1e-12);
     }
 }

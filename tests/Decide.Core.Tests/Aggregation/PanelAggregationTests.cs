@@ -21,9 +21,9 @@ public sealed class PanelAggregationTests
 
         var good = new Tfn(7, 9, 10);
         var fair = new Tfn(3, 5, 7);
-        Assert.Equal((0.25 * good.Lower) + (0.75 * fair.Lower), cell.Aggregated.Lower, 12);
-        Assert.Equal((0.25 * good.Middle) + (0.75 * fair.Middle), cell.Aggregated.Middle, 12);
-        Assert.Equal((0.25 * good.Upper) + (0.75 * fair.Upper), cell.Aggregated.Upper, 12);
+        Assert.Equal((0.25 * good.Lower) + (0.75 * fair.Lower), cell.Aggregated.Lower, 1e-12);
+        Assert.Equal((0.25 * good.Middle) + (0.75 * fair.Middle), cell.Aggregated.Middle, 1e-12);
+        Assert.Equal((0.25 * good.Upper) + (0.75 * fair.Upper), cell.Aggregated.Upper, 1e-12);
         Assert.Equal(2, cell.Raters);
         Assert.Equal([new DeclinedCell("D2", "recused: former employee of S1")], cell.Declined);
     }

@@ -18,7 +18,7 @@ public sealed class ExplanationTests
         var terms = Explanation.WhyLeads(result, a, b);
         Assert.Equal(5, terms.Count);
         Assert.Equal(["C1", "C2", "C3", "C4", "C5"], terms.Select(t => t.Criterion).Order());
-        Assert.Equal((first.DMinus - second.DMinus) + (second.DPlus - first.DPlus), terms.Sum(t => t.Advantage), 12);
+        Assert.Equal((first.DMinus - second.DMinus) + (second.DPlus - first.DPlus), terms.Sum(t => t.Advantage), 1e-12);
     }
 
     [Fact]
@@ -29,7 +29,7 @@ public sealed class ExplanationTests
         Assert.Equal(forward.OrderByDescending(t => Math.Abs(t.Advantage)).Select(t => t.Criterion), forward.Select(t => t.Criterion));
 
         var backward = Explanation.WhyLeads(result, "A1", "A2").ToDictionary(t => t.Criterion, t => t.Advantage);
-        Assert.All(forward, t => Assert.Equal(-t.Advantage, backward[t.Criterion], 12));
+        Assert.All(forward, t => Assert.Equal(-t.Advantage, backward[t.Criterion], 1e-12));
 
         // A2 is rated (VG, VG, VG) against A1's (G, MG, F) on C2 and (VG, MG, G) against (F, F, F) on C5.
         Assert.True(forward.Single(t => t.Criterion == "C2").Advantage > 0);

@@ -71,12 +71,12 @@ public sealed class EigenvalueCrossCheckTests
         }
 
         var lambda = eigenvalues[principal].Real;
-        Assert.Equal(0, eigenvalues[principal].Imaginary, 12);
+        Assert.Equal(0, eigenvalues[principal].Imaginary, 1e-12);
         Assert.InRange(report.LambdaMax, lambda - Tolerance, lambda + Tolerance);
 
         // CI and CR follow from λmax by Saaty's definitions.
-        Assert.Equal((lambda - n) / (n - 1), report.ConsistencyIndex, 9);
-        Assert.Equal((lambda - n) / (n - 1) / RandomIndex.For(n), report.Ratio, 9);
+        Assert.Equal((lambda - n) / (n - 1), report.ConsistencyIndex, 1e-9);
+        Assert.Equal((lambda - n) / (n - 1) / RandomIndex.For(n), report.Ratio, 1e-9);
         Assert.Equal(report.Ratio <= RandomIndex.Threshold(n), report.Acceptable);
 
         // The eigenvector for λmax, scaled to sum 1.

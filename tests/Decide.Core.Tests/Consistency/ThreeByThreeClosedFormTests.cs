@@ -19,9 +19,9 @@ public sealed class ThreeByThreeClosedFormTests
         var report = PairwiseConsistency.Analyze(Matrix(a12, a23, a13), ["A", "B", "C"]);
         var c = a12 * a23 / a13;
         var lambda = 1 + Math.Cbrt(c) + (1 / Math.Cbrt(c));
-        Assert.Equal(lambda, report.LambdaMax, 10);
-        Assert.Equal(Math.Max(0, (lambda - 3) / 2 / 0.58), report.Ratio, 10);
-        Assert.Equal(Math.Log(c) * Math.Log(c) / 3, report.Gci, 10);
+        Assert.Equal(lambda, report.LambdaMax, 1e-10);
+        Assert.Equal(Math.Max(0, (lambda - 3) / 2 / 0.58), report.Ratio, 1e-10);
+        Assert.Equal(Math.Log(c) * Math.Log(c) / 3, report.Gci, 1e-10);
     }
 
     [Theory]

@@ -18,8 +18,8 @@ public sealed class WorstJudgementTests
         Assert.InRange(report.WorstJudgements.Count, 1, 3);
         var worst = report.WorstJudgements[0];
         Assert.Equal(("A", "C", 8.0), (worst.Row, worst.Col, worst.Given));
-        Assert.Equal(report.Eigenvector[0] / report.Eigenvector[2], worst.Consistent, 12);
-        Assert.Equal(Math.Abs(Math.Log(8 / worst.Consistent)), worst.Deviation, 12);
+        Assert.Equal(report.Eigenvector[0] / report.Eigenvector[2], worst.Consistent, 1e-12);
+        Assert.Equal(Math.Abs(Math.Log(8 / worst.Consistent)), worst.Deviation, 1e-12);
 
         // The eigenvector absorbs part of the error: in a 4 × 4 matrix the implied value lies near the geometric
         // midpoint of the original 2 and the given 8 (row geometric means put it at exactly √(2·8) = 4), pointing the

@@ -5,7 +5,7 @@ namespace Decide.Core.Tests.Fuzzy;
 /// <summary>Arithmetic as defined in Chen (2000), Fuzzy Sets and Systems 114:1–9, §2 (shared METHODS §1).</summary>
 public sealed class TfnArithmeticTests
 {
-    private const int Digits = 12;
+    private const double Tolerance = 1e-12;
 
     [Fact]
     public void Addition_adds_each_vertex()
@@ -74,8 +74,8 @@ public sealed class TfnArithmeticTests
 
     private static void AssertTfn(Tfn expected, Tfn actual)
     {
-        Assert.Equal(expected.Lower, actual.Lower, Digits);
-        Assert.Equal(expected.Middle, actual.Middle, Digits);
-        Assert.Equal(expected.Upper, actual.Upper, Digits);
+        Assert.Equal(expected.Lower, actual.Lower, Tolerance);
+        Assert.Equal(expected.Middle, actual.Middle, Tolerance);
+        Assert.Equal(expected.Upper, actual.Upper, Tolerance);
     }
 }

@@ -66,7 +66,7 @@ public sealed class TfnMeasureTests
     [InlineData(9, 0)]
     public void Membership_rises_to_one_at_the_peak_and_falls_to_zero(double x, double expected)
     {
-        Assert.Equal(expected, new Tfn(2, 6, 8).Membership(x), 12);
+        Assert.Equal(expected, new Tfn(2, 6, 8).Membership(x), 1e-12);
     }
 
     [Fact]
@@ -85,8 +85,8 @@ public sealed class TfnMeasureTests
         foreach (var alpha in new[] { 0.1, 0.25, 0.6, 0.9 })
         {
             var (low, high) = a.AlphaCut(alpha);
-            Assert.Equal(alpha, a.Membership(low), 12);
-            Assert.Equal(alpha, a.Membership(high), 12);
+            Assert.Equal(alpha, a.Membership(low), 1e-12);
+            Assert.Equal(alpha, a.Membership(high), 1e-12);
         }
     }
 }

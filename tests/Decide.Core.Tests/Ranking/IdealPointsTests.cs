@@ -14,11 +14,11 @@ public sealed class IdealPointsTests
     public void Unit_ideal_points_are_one_and_zero()
     {
         var (dPlus, dMinus, closeness) = Run(IdealPoints.Unit);
-        Assert.Equal(Vertex(0.2, 0.4, 0.6, 1), dPlus[0], 12);
-        Assert.Equal(Vertex(0.2, 0.4, 0.6, 0), dMinus[0], 12);
-        Assert.Equal(Vertex(0.4, 0.8, 1.0, 1), dPlus[1], 12);
-        Assert.Equal(Vertex(0.4, 0.8, 1.0, 0), dMinus[1], 12);
-        Assert.Equal(dMinus[0] / (dPlus[0] + dMinus[0]), closeness[0], 12);
+        Assert.Equal(Vertex(0.2, 0.4, 0.6, 1), dPlus[0], 1e-12);
+        Assert.Equal(Vertex(0.2, 0.4, 0.6, 0), dMinus[0], 1e-12);
+        Assert.Equal(Vertex(0.4, 0.8, 1.0, 1), dPlus[1], 1e-12);
+        Assert.Equal(Vertex(0.4, 0.8, 1.0, 0), dMinus[1], 1e-12);
+        Assert.Equal(dMinus[0] / (dPlus[0] + dMinus[0]), closeness[0], 1e-12);
     }
 
     [Fact]
@@ -26,12 +26,12 @@ public sealed class IdealPointsTests
     {
         // Best = largest upper value 1.0, worst = smallest lower value 0.2, both crisp.
         var (dPlus, dMinus, closeness) = Run(IdealPoints.Extreme);
-        Assert.Equal(Vertex(0.2, 0.4, 0.6, 1.0), dPlus[0], 12);
-        Assert.Equal(Vertex(0.2, 0.4, 0.6, 0.2), dMinus[0], 12);
-        Assert.Equal(Vertex(0.4, 0.8, 1.0, 1.0), dPlus[1], 12);
-        Assert.Equal(Vertex(0.4, 0.8, 1.0, 0.2), dMinus[1], 12);
+        Assert.Equal(Vertex(0.2, 0.4, 0.6, 1.0), dPlus[0], 1e-12);
+        Assert.Equal(Vertex(0.2, 0.4, 0.6, 0.2), dMinus[0], 1e-12);
+        Assert.Equal(Vertex(0.4, 0.8, 1.0, 1.0), dPlus[1], 1e-12);
+        Assert.Equal(Vertex(0.4, 0.8, 1.0, 0.2), dMinus[1], 1e-12);
         Assert.True(closeness[1] > closeness[0]);
-        Assert.Equal(dMinus[1] / (dPlus[1] + dMinus[1]), closeness[1], 12);
+        Assert.Equal(dMinus[1] / (dPlus[1] + dMinus[1]), closeness[1], 1e-12);
     }
 
     [Fact]
@@ -41,7 +41,7 @@ public sealed class IdealPointsTests
         double[] dPlus = new double[3], dMinus = new double[3], closeness = new double[3];
         FuzzyTopsis.Evaluate([Tfn.Crisp(2), Tfn.Crisp(5), Tfn.Crisp(8)], 1, [false], [Tfn.One], IdealPoints.Extreme,
             weighted, dPlus, dMinus, closeness);
-        Assert.Equal([0.0, 0.5, 1.0], closeness.Select(c => Math.Round(c, 12)));
+        Assert.Equal([0.0, 0.5, 1.0], closeness, (x, y) => Math.Abs(x - y) < 1e-12);
     }
 
     [Fact]

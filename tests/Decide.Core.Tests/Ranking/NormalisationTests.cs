@@ -54,7 +54,7 @@ public sealed class NormalisationTests
     {
         var weighted = new Tfn[3];
         FuzzyTopsis.Normalise([Tfn.Crisp(40_000), Tfn.Crisp(50_000), Tfn.Crisp(80_000)], 3, 1, [true], [Tfn.One], weighted);
-        Assert.Equal([1.0, 0.8, 0.5], weighted.Select(t => Math.Round(t.Middle, 12)));
+        Assert.Equal([1.0, 0.8, 0.5], weighted.Select(t => t.Middle), (x, y) => Math.Abs(x - y) < 1e-12);
         Assert.All(weighted, t => Assert.True(t.IsCrisp));
     }
 
@@ -67,8 +67,8 @@ public sealed class NormalisationTests
 
     private static void AssertTfn(Tfn expected, Tfn actual)
     {
-        Assert.Equal(expected.Lower, actual.Lower, 12);
-        Assert.Equal(expected.Middle, actual.Middle, 12);
-        Assert.Equal(expected.Upper, actual.Upper, 12);
+        Assert.Equal(expected.Lower, actual.Lower, 1e-12);
+        Assert.Equal(expected.Middle, actual.Middle, 1e-12);
+        Assert.Equal(expected.Upper, actual.Upper, 1e-12);
     }
 }

@@ -58,9 +58,9 @@ public sealed class BuiltInScalesTests
         for (var i = 0; i < scale.Count; i++)
         {
             var t = scale[i].Value;
-            Assert.Equal(scale.Minimum + (i * step), t.Middle, 12);
-            Assert.Equal(Math.Max(scale.Minimum, t.Middle - step), t.Lower, 12);
-            Assert.Equal(Math.Min(scale.Maximum, t.Middle + step), t.Upper, 12);
+            Assert.Equal(scale.Minimum + (i * step), t.Middle, 1e-12);
+            Assert.Equal(Math.Max(scale.Minimum, t.Middle - step), t.Lower, 1e-12);
+            Assert.Equal(Math.Min(scale.Maximum, t.Middle + step), t.Upper, 1e-12);
             Assert.False(string.IsNullOrWhiteSpace(scale[i].Label));
         }
     }

@@ -13,6 +13,9 @@ public static class DecideArbitraries
             .Select(seed => new GeneratedEvaluation(seed, EvaluationGenerator.Generate(seed)))
             .ToArbitrary();
 
+    /// <summary>Seeds over the whole non-negative int range.</summary>
+    public static Arbitrary<Seed> Seed() => Gen.Choose(0, int.MaxValue).Select(v => new Seed(v)).ToArbitrary();
+
     /// <summary>
     /// Valid TFNs with values in [−1000, 1000] on a grid of 0.001 (a quarter of them crisp), the range of values the
     /// engine meets in practice.

@@ -16,30 +16,30 @@ public sealed class BuckleyPropertyTests
         var expected = weights.Normalised;
         for (var i = 0; i < n; i++)
         {
-            Assert.Equal(expected[i], w[i].Lower, 12);
-            Assert.Equal(expected[i], w[i].Middle, 12);
-            Assert.Equal(expected[i], w[i].Upper, 12);
+            Assert.Equal(expected[i], w[i].Lower, 1e-12);
+            Assert.Equal(expected[i], w[i].Middle, 1e-12);
+            Assert.Equal(expected[i], w[i].Upper, 1e-12);
         }
     }
 
     [Property]
-    public void Fuzzy_weights_are_ordered_and_crisp_shares_sum_to_one(int seed)
+    public void Fuzzy_weights_are_ordered_and_crisp_shares_sum_to_one(Seed seed)
     {
-        var random = new Random(seed);
+        var random = seed.Random();
         var n = random.Next(2, 10);
         var w = BuckleyWeights.Compute(ReciprocalMatrices.RandomFuzzy(n, random));
 
         Assert.All(w, x => Assert.True(0 < x.Lower && x.Lower <= x.Middle && x.Middle <= x.Upper, $"{x} is out of order"));
-        Assert.Equal(1, w.Sum(x => x.Middle), 12); // middles are normalised by their own sum
+        Assert.Equal(1, w.Sum(x => x.Middle), 1e-12); // middles are normalised by their own sum
         var shares = CrispShares.FromCentroids(w);
-        Assert.Equal(1, shares.Sum(), 12);
+        Assert.Equal(1, shares.Sum(), 1e-12);
         Assert.All(shares, s => Assert.InRange(s, 0, 1));
     }
 
     [Property]
-    public void The_panel_matrix_of_reciprocal_matrices_is_reciprocal(int seed)
+    public void The_panel_matrix_of_reciprocal_matrices_is_reciprocal(Seed seed)
     {
-        var random = new Random(seed);
+        var random = seed.Random();
         var n = random.Next(2, 8);
         var k = random.Next(1, 6);
         var matrices = Enumerable.Range(0, k).Select(_ => ReciprocalMatrices.RandomFuzzy(n, random)).ToArray();
@@ -54,9 +54,9 @@ public sealed class BuckleyPropertyTests
                 var ij = panel[i, j];
                 var ji = panel[j, i];
                 Assert.True(ij.Lower <= ij.Middle && ij.Middle <= ij.Upper);
-                Assert.Equal(1 / ij.Upper, ji.Lower, 12);
-                Assert.Equal(1 / ij.Middle, ji.Middle, 12);
-                Assert.Equal(1 / ij.Lower, ji.Upper, 12);
+                Assert.Equal(1 / ij.Upper, ji.Lower, 1e-12);
+                Assert.Equal(1 / ij.Middle, ji.Middle, 1e-12);
+                Assert.Equal(1 / ij.Lower, ji.Upper, 1e-12);
             }
         }
     }

@@ -43,7 +43,7 @@ public sealed class ExtentAnalysisDefectTests
         Assert.InRange(shares[1], 0.15, 0.30); // ≈ 0.20 [derived]
         Assert.True(shares[0] > shares[1] && shares[1] > shares[2], "the judgements' order quality > delivery > reporting is kept");
         Assert.True(shares[2] > 0.05);
-        Assert.Equal(1, shares.Sum(), 12);
+        Assert.Equal(1, shares.Sum(), 1e-12);
     }
 
     [Fact]
@@ -51,7 +51,7 @@ public sealed class ExtentAnalysisDefectTests
     {
         // A check of the reference itself: all judgements (1, 1, 1) give equal extents and equal weights.
         var weights = RejectedChangExtentAnalysis.Weights(new FuzzyPairwiseMatrix(["A", "B", "C"]));
-        Assert.All(weights, w => Assert.Equal(1.0 / 3, w, 12));
+        Assert.All(weights, w => Assert.Equal(1.0 / 3, w, 1e-12));
     }
 
     [Theory]
@@ -60,6 +60,6 @@ public sealed class ExtentAnalysisDefectTests
     [InlineData(0.1, 0.3, 0.5, 0.2, 0.4, 0.6, 0.75)] // overlap: (0.2 − 0.5)/((0.3 − 0.5) − (0.4 − 0.2)) = 0.75
     public void Degree_of_possibility_follows_changs_definition(double la, double ma, double ua, double lb, double mb, double ub, double expected)
     {
-        Assert.Equal(expected, RejectedChangExtentAnalysis.DegreeOfPossibility(new Tfn(la, ma, ua), new Tfn(lb, mb, ub)), 12);
+        Assert.Equal(expected, RejectedChangExtentAnalysis.DegreeOfPossibility(new Tfn(la, ma, ua), new Tfn(lb, mb, ub)), 1e-12);
     }
 }

@@ -43,7 +43,7 @@ public sealed class GroupWeightsTests
         AssertTfn(new Tfn(0.5, 0.7, 0.9), weights["PRICE"].Fuzzy); // top level keeps its importance (MH)
         Assert.Null(weights["PRICE"].Group);
         Assert.Null(weights["PRICE"].Local);
-        Assert.Equal(1, weights.Values.Sum(w => w.Crisp), 12);
+        Assert.Equal(1, weights.Values.Sum(w => w.Crisp), 1e-12);
     }
 
     [Fact]
@@ -67,10 +67,10 @@ public sealed class GroupWeightsTests
         AssertTfn(innerWeights[1], weights["STAFF"].Local!.Value);
 
         // Middles: TECH ¾ · (QUALITY ⅔, STAFF ⅓), PRICE ¼.
-        Assert.Equal(0.5, weights["QUALITY"].Fuzzy.Middle, 12);
-        Assert.Equal(0.25, weights["STAFF"].Fuzzy.Middle, 12);
-        Assert.Equal(0.25, weights["PRICE"].Fuzzy.Middle, 12);
-        Assert.Equal(1, weights.Values.Sum(w => w.Crisp), 12);
+        Assert.Equal(0.5, weights["QUALITY"].Fuzzy.Middle, 1e-12);
+        Assert.Equal(0.25, weights["STAFF"].Fuzzy.Middle, 1e-12);
+        Assert.Equal(0.25, weights["PRICE"].Fuzzy.Middle, 1e-12);
+        Assert.Equal(1, weights.Values.Sum(w => w.Crisp), 1e-12);
 
         // One report per matrix for D1 and one for the panel, the group's matrix named by its group.
         Assert.Equal(4, result.Consistency.Count);
@@ -103,8 +103,8 @@ public sealed class GroupWeightsTests
 
     private static void AssertTfn(Tfn expected, Tfn actual)
     {
-        Assert.Equal(expected.Lower, actual.Lower, 12);
-        Assert.Equal(expected.Middle, actual.Middle, 12);
-        Assert.Equal(expected.Upper, actual.Upper, 12);
+        Assert.Equal(expected.Lower, actual.Lower, 1e-12);
+        Assert.Equal(expected.Middle, actual.Middle, 1e-12);
+        Assert.Equal(expected.Upper, actual.Upper, 1e-12);
     }
 }

@@ -33,14 +33,14 @@ public sealed class PanelMatrixTests
 
         // Equal weights: opposite views cancel to (√(2·¼), 1, √(4·½)) = (1/√2, 1, √2).
         var equal = FuzzyPairwiseMatrix.GeometricMean([first, second], [1, 1]);
-        Assert.Equal(1 / Math.Sqrt(2), equal[0, 1].Lower, 12);
-        Assert.Equal(1, equal[0, 1].Middle, 12);
-        Assert.Equal(Math.Sqrt(2), equal[0, 1].Upper, 12);
+        Assert.Equal(1 / Math.Sqrt(2), equal[0, 1].Lower, 1e-12);
+        Assert.Equal(1, equal[0, 1].Middle, 1e-12);
+        Assert.Equal(Math.Sqrt(2), equal[0, 1].Upper, 1e-12);
 
         // Weights 3 : 1 give exponents ¾ and ¼.
         var weighted = FuzzyPairwiseMatrix.GeometricMean([first, second], [3, 1]);
-        Assert.Equal(Math.Pow(3, 0.75) * Math.Pow(1.0 / 3, 0.25), weighted[0, 1].Middle, 12);
-        Assert.Equal(1 / weighted[0, 1].Middle, weighted[1, 0].Middle, 12);
+        Assert.Equal(Math.Pow(3, 0.75) * Math.Pow(1.0 / 3, 0.25), weighted[0, 1].Middle, 1e-12);
+        Assert.Equal(1 / weighted[0, 1].Middle, weighted[1, 0].Middle, 1e-12);
     }
 
     [Fact]
