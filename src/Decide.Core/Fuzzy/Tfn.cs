@@ -122,7 +122,8 @@ public readonly record struct Tfn
     }
 
     /// <summary>
-    /// The α-cut [l + α(m − l), u − α(u − m)]: the closed interval of values whose membership is at least α.
+    /// The α-cut [l + α(m − l), u − α(u − m)]: the closed interval of values whose membership is at least α; at
+    /// α = 1 exactly [m, m], at α = 0 exactly [l, u].
     /// </summary>
     /// <param name="alpha">α in [0, 1].</param>
     /// <exception cref="ArgumentOutOfRangeException">α is outside [0, 1].</exception>
@@ -133,7 +134,10 @@ public readonly record struct Tfn
             throw new ArgumentOutOfRangeException(nameof(alpha), alpha, "α must lie in [0, 1].");
         }
 
-        return (Lower + (alpha * (Middle - Lower)), Upper - (alpha * (Upper - Middle)));
+        // Written as convex combinations and clamped so that α = 0 gives exactly [l, u] and α = 1 exactly [m, m];
+        // the form l + α(m − l) can land an ulp beside m at α = 1 and leave the peak outside its own 1-cut.
+        return (Math.Clamp(((1 - alpha) * Lower) + (alpha * Middle), Lower, Middle),
+            Math.Clamp(((1 - alpha) * Upper) + (alpha * Middle), Middle, Upper));
     }
 
     /// <summary>Membership of x: 1 at m, falling linearly to 0 at l and u, 0 outside.</summary>

@@ -80,9 +80,9 @@ public sealed class Chen2000WorkedExample
     {
         foreach (var r in DecisionEngine.Analyze(Build()).Ranking)
         {
-            Assert.Equal(r.DMinus / (r.DPlus + r.DMinus), r.Closeness, 12);
-            Assert.Equal(r.DPlus, r.Contributions.Sum(c => c.DPlus), 12);
-            Assert.Equal(r.DMinus, r.Contributions.Sum(c => c.DMinus), 12);
+            Assert.Equal(r.DMinus / (r.DPlus + r.DMinus), r.Closeness, 1e-12);
+            Assert.Equal(r.DPlus, r.Contributions.Sum(c => c.DPlus), 1e-12);
+            Assert.Equal(r.DMinus, r.Contributions.Sum(c => c.DMinus), 1e-12);
         }
     }
 }
