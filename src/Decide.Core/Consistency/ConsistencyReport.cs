@@ -4,7 +4,10 @@ namespace Decide.Core.Consistency;
 /// <param name="Row">Row item id.</param>
 /// <param name="Col">Column item id.</param>
 /// <param name="Given">The middle value given (row over column).</param>
-/// <param name="Consistent">wᵣₒᵥ / w꜀ₒₗ from the principal eigenvector: the value that would agree with the other judgements.</param>
+/// <param name="Consistent">
+/// The value the other judgements imply for this pair (geometric mean of the indirect judgements row→k→col over the
+/// other items): what the assessor could give to agree with the rest of the matrix.
+/// </param>
 /// <param name="Deviation">|ln(given / consistent)|: how far off, on a log scale (0 = in agreement).</param>
 public sealed record InconsistentJudgement(string Row, string Col, double Given, double Consistent, double Deviation);
 

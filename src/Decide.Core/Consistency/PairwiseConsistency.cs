@@ -8,7 +8,8 @@ namespace Decide.Core.Consistency;
 /// λmax is found by power iteration started from the row geometric means; for a positive matrix it converges to
 /// the Perron root (tests cross-check it against MathNet.Numerics' general eigenvalue solver to 1e-9).
 /// CI = (λmax − n)/(n − 1), CR = CI/RI(n) (Saaty 1980). GCI = 2/((n−1)(n−2)) Σᵢ&lt;ⱼ (ln aᵢⱼ − ln wᵢ + ln wⱼ)² with w the
-/// row geometric means (Aguarón &amp; Moreno-Jiménez 2003). See docs/methods.md §5.
+/// row geometric means (Aguarón &amp; Moreno-Jiménez 2003). A judgement's "consistent" value is what the other
+/// judgements imply for it: the geometric mean of aᵢₖ·aₖⱼ over the other items. See docs/methods.md §5.
 /// </remarks>
 public static class PairwiseConsistency
 {
@@ -48,26 +49,41 @@ public static class PairwiseConsistency
         var gci = GeometricConsistencyIndex(matrix, n);
         var acceptable = cr <= RandomIndex.Threshold(n);
         var gciAcceptable = gci <= RandomIndex.GciThreshold(n);
-        var worst = acceptable && gciAcceptable ? [] : WorstJudgements(matrix, w, items, 3);
+        var worst = acceptable && gciAcceptable ? [] : WorstJudgements(matrix, items, 3);
         return new ConsistencyReport(n, lambda, ci, ri, RandomIndex.TableName, cr, RandomIndex.Threshold(n), acceptable,
             gci, RandomIndex.GciThreshold(n), gciAcceptable, w, worst, IntransitiveTriads(matrix, items));
     }
 
     /// <summary>
-    /// The judgements ranked by how far each lies from the value the principal eigenvector implies
-    /// (|ln(aᵢⱼ wⱼ / wᵢ)|), largest first; at most <paramref name="count"/>.
+    /// The judgements ranked by how far each lies from the value the other judgements imply, largest first; at most
+    /// <paramref name="count"/>. The implied value for (i, j) is the geometric mean of the indirect judgements
+    /// aᵢₖ·aₖⱼ over every other item k: what the rest of the matrix says about i over j, untouched by the judgement
+    /// itself. Needs n ≥ 3.
     /// </summary>
-    public static IReadOnlyList<InconsistentJudgement> WorstJudgements(
-        ReadOnlySpan<double> matrix, IReadOnlyList<double> eigenvector, IReadOnlyList<string> items, int count)
+    public static IReadOnlyList<InconsistentJudgement> WorstJudgements(ReadOnlySpan<double> matrix, IReadOnlyList<string> items, int count)
     {
         var n = items.Count;
+        if (n < 3)
+        {
+            return [];
+        }
+
         var all = new List<InconsistentJudgement>(n * (n - 1) / 2);
         for (var i = 0; i < n; i++)
         {
             for (var j = i + 1; j < n; j++)
             {
+                double logSum = 0;
+                for (var k = 0; k < n; k++)
+                {
+                    if (k != i && k != j)
+                    {
+                        logSum += Math.Log(matrix[(i * n) + k]) + Math.Log(matrix[(k * n) + j]);
+                    }
+                }
+
                 var given = matrix[(i * n) + j];
-                var consistent = eigenvector[i] / eigenvector[j];
+                var consistent = Math.Exp(logSum / (n - 2));
                 all.Add(new InconsistentJudgement(items[i], items[j], given, consistent, Math.Abs(Math.Log(given / consistent))));
             }
         }
