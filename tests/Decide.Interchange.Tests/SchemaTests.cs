@@ -7,12 +7,6 @@ namespace Decide.Interchange.Tests;
 /// <summary>The published JSON Schemas agree with the examples, the samples and what the writers produce.</summary>
 public sealed class SchemaTests
 {
-    private static readonly Lazy<JsonSchema> EvaluationSchema =
-        new(() => JsonSchema.FromFile(RepositoryFiles.PathOf("docs", "schema", "decide-evaluation-1.schema.json")));
-
-    private static readonly Lazy<JsonSchema> ResultsSchema =
-        new(() => JsonSchema.FromFile(RepositoryFiles.PathOf("docs", "schema", "decide-results-1.schema.json")));
-
     /// <summary>The documented example and every file in samples/, as paths relative to the repository.</summary>
     public static TheoryData<string> EvaluationFiles() => [.. EvaluationFilePaths()];
 
@@ -44,7 +38,7 @@ public sealed class SchemaTests
     [MemberData(nameof(EvaluationFiles))]
     public void Every_example_and_sample_matches_the_evaluation_schema(string file)
     {
-        AssertValid(EvaluationSchema.Value, File.ReadAllText(RepositoryFiles.PathOf(file)));
+        AssertValid(Schemas.Evaluation, File.ReadAllText(RepositoryFiles.PathOf(file)));
     }
 
     [Theory]
@@ -55,7 +49,7 @@ public sealed class SchemaTests
 
         var results = ResultsWriter.ToJson(DecisionEngine.Analyze(read.Evaluation), read.Evaluation);
 
-        AssertValid(ResultsSchema.Value, results);
+        AssertValid(Schemas.Results, results);
     }
 
     [Fact]
@@ -63,15 +57,15 @@ public sealed class SchemaTests
     {
         var read = EvaluationFileReader.Read(Files.PairwiseText);
 
-        AssertValid(ResultsSchema.Value, ResultsWriter.ToJson(DecisionEngine.Analyze(read.Evaluation), read.Evaluation));
+        AssertValid(Schemas.Results, ResultsWriter.ToJson(DecisionEngine.Analyze(read.Evaluation), read.Evaluation));
     }
 
     [Fact]
     public void What_the_evaluation_writer_produces_matches_the_evaluation_schema()
     {
-        AssertValid(EvaluationSchema.Value, Files.PairwiseText);
-        AssertValid(EvaluationSchema.Value, EvaluationFileWriter.ToJson(EvaluationFileReader.Read(Files.PairwiseText)));
-        AssertValid(EvaluationSchema.Value, EvaluationFileWriter.ToJson(EvaluationFileReader.Read(Files.MinimalText)));
+        AssertValid(Schemas.Evaluation, Files.PairwiseText);
+        AssertValid(Schemas.Evaluation, EvaluationFileWriter.ToJson(EvaluationFileReader.Read(Files.PairwiseText)));
+        AssertValid(Schemas.Evaluation, EvaluationFileWriter.ToJson(EvaluationFileReader.Read(Files.MinimalText)));
     }
 
     [Theory]
@@ -85,7 +79,7 @@ public sealed class SchemaTests
     {
         var node = Files.Minimal().Set(at, json);
 
-        Assert.False(EvaluationSchema.Value.Evaluate(JsonDocument.Parse(node.ToJsonString()).RootElement).IsValid);
+        Assert.False(Schemas.Evaluation.Evaluate(JsonDocument.Parse(node.ToJsonString()).RootElement).IsValid);
         Assert.NotEmpty(Files.ErrorsOf(node));
     }
 
@@ -96,19 +90,8 @@ public sealed class SchemaTests
         var results = System.Text.Json.Nodes.JsonNode.Parse(ResultsWriter.ToJson(DecisionEngine.Analyze(read.Evaluation), read.Evaluation))!.AsObject();
         results.Remove("ranking");
 
-        Assert.False(ResultsSchema.Value.Evaluate(JsonDocument.Parse(results.ToJsonString()).RootElement).IsValid);
+        Assert.False(Schemas.Results.Evaluate(JsonDocument.Parse(results.ToJsonString()).RootElement).IsValid);
     }
 
-    private static void AssertValid(JsonSchema schema, string json)
-    {
-        using var document = JsonDocument.Parse(json);
-        var result = schema.Evaluate(document.RootElement, new EvaluationOptions { OutputFormat = OutputFormat.List });
-        if (!result.IsValid)
-        {
-            var problems = (result.Details ?? [])
-                .Where(d => d.Errors is { Count: > 0 })
-                .Select(d => $"{d.InstanceLocation}: {string.Join("; ", d.Errors!.Values)}");
-            Assert.Fail("Schema validation failed:\n" + string.Join("\n", problems));
-        }
-    }
+    private static void AssertValid(JsonSchema schema, string json) => Schemas.AssertValid(schema, json);
 }
