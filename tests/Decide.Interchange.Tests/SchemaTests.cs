@@ -1,5 +1,7 @@
 using System.Text.Json;
+using System.Text.Json.Nodes;
 using Decide.Core.Analysis;
+using Decide.Core.Robustness;
 using Json.Schema;
 
 namespace Decide.Interchange.Tests;
@@ -52,6 +54,60 @@ public sealed class SchemaTests
         AssertValid(Schemas.Results, results);
     }
 
+    [Theory]
+    [MemberData(nameof(EvaluationFiles))]
+    public void Results_with_robustness_of_every_example_and_sample_match_the_results_schema(string file)
+    {
+        var read = EvaluationFileReader.ReadFile(RepositoryFiles.PathOf(file));
+
+        AssertValid(Schemas.Results, WithRobustness(read));
+    }
+
+    [Fact]
+    public void Results_with_robustness_of_a_pairwise_evaluation_with_uniform_weights_match_the_results_schema()
+    {
+        var read = EvaluationFileReader.Read(Files.Pairwise().Set("options/acceptabilityWeights", "\"uniform\"").ToJsonString());
+
+        var json = WithRobustness(read);
+
+        AssertValid(Schemas.Results, json);
+        Assert.Contains("\"acceptabilityWeights\": \"uniform\"", json);
+    }
+
+    [Theory]
+    [InlineData("agreement", "kendallW")]
+    [InlineData("agreement", "cells")]
+    [InlineData("sensitivity", "sweeps")]
+    [InlineData("sensitivity", "seed")]
+    public void The_results_schema_rejects_robustness_sections_missing_a_fixed_member(string section, string member)
+    {
+        var results = JsonNode.Parse(WithRobustness(EvaluationFileReader.Read(Files.PairwiseText)))!.AsObject();
+        results[section]!.AsObject().Remove(member);
+
+        Assert.False(Schemas.IsValid(Schemas.Results, results.ToJsonString()));
+    }
+
+    [Fact]
+    public void The_results_schema_rejects_an_unknown_member_in_a_robustness_section_and_a_reversal_without_its_pair()
+    {
+        var json = WithRobustness(EvaluationFileReader.ReadFile(RepositoryFiles.PathOf("samples", "bus-stop-displays-importance.json")));
+        var unknown = JsonNode.Parse(json)!.AsObject();
+        unknown["agreement"]!["allCells"] = new JsonArray();
+        var noPair = JsonNode.Parse(json)!.AsObject();
+        var reversal = noPair["sensitivity"]!["sweeps"]!.AsArray().Select(s => s!["reversals"]!.AsArray()).First(r => r.Count > 0)[0]!.AsObject();
+        reversal.Remove("pair");
+
+        Assert.False(Schemas.IsValid(Schemas.Results, unknown.ToJsonString()));
+        Assert.False(Schemas.IsValid(Schemas.Results, noPair.ToJsonString()));
+    }
+
+    private static string WithRobustness(EvaluationFile read)
+    {
+        var prepared = DecisionEngine.Prepare(read.Evaluation);
+        var result = prepared.Analyze();
+        return ResultsWriter.ToJson(result, read.Evaluation, RobustnessAnalysis.Run(prepared, result, new RobustnessOptions(Draws: 300, Seed: 1)));
+    }
+
     [Fact]
     public void Results_of_a_pairwise_evaluation_match_the_results_schema()
     {
@@ -87,7 +143,7 @@ public sealed class SchemaTests
     public void The_results_schema_rejects_a_document_without_a_ranking()
     {
         var read = EvaluationFileReader.Read(Files.MinimalText);
-        var results = System.Text.Json.Nodes.JsonNode.Parse(ResultsWriter.ToJson(DecisionEngine.Analyze(read.Evaluation), read.Evaluation))!.AsObject();
+        var results = JsonNode.Parse(ResultsWriter.ToJson(DecisionEngine.Analyze(read.Evaluation), read.Evaluation))!.AsObject();
         results.Remove("ranking");
 
         Assert.False(Schemas.Results.Evaluate(JsonDocument.Parse(results.ToJsonString()).RootElement).IsValid);
