@@ -1,10 +1,17 @@
 using System.CommandLine;
+using System.CommandLine.Parsing;
+using System.Globalization;
+using System.Numerics;
 using Decide.Core.Analysis;
+using Decide.Core.Robustness;
 using Decide.Interchange;
 
 namespace Decide.Cli;
 
-/// <summary><c>decide analyse FILE [--format json|table]</c>: reads an evaluation file, analyses it and prints the results.</summary>
+/// <summary>
+/// <c>decide analyse FILE [--format json|table] [--draws N] [--seed S] [--threads T] [--no-robustness]</c>: reads an
+/// evaluation file, analyses it, runs the robustness checks and prints the results.
+/// </summary>
 public sealed class AnalyseCommand
 {
     private readonly TextWriter _stdout;
@@ -22,37 +29,101 @@ public sealed class AnalyseCommand
         HelpName = "json|table",
     }.AcceptOnlyFromAmong("json", "table");
 
+    private readonly Option<int> _draws = new("--draws")
+    {
+        Description = "Monte Carlo draws for rank acceptability; 0 skips it.",
+        DefaultValueFactory = _ => RobustnessOptions.DefaultDraws,
+        CustomParser = WholeNumber(0, "0 skips rank acceptability"),
+        HelpName = "N",
+    };
+
+    private readonly Option<ulong> _seed = new("--seed")
+    {
+        Description = "Seed of the draws (a whole number, 0 or more); the same seed gives the same results.",
+        DefaultValueFactory = _ => RobustnessOptions.DefaultSeed,
+        CustomParser = WholeNumber(0UL, null),
+        HelpName = "S",
+    };
+
+    private readonly Option<int> _threads = new("--threads")
+    {
+        Description = "Threads for the draws (1 or more; default: the number of processors). The results do not depend on it.",
+        DefaultValueFactory = _ => Environment.ProcessorCount,
+        CustomParser = WholeNumber(1, null),
+        HelpName = "T",
+    };
+
+    private readonly Option<bool> _noRobustness = new("--no-robustness")
+    {
+        Description = "Skip the robustness checks (sensitivity, panel agreement, summary): the ranking only.",
+    };
+
     /// <summary>Creates the command, writing results to <paramref name="stdout"/> and problems to <paramref name="stderr"/>.</summary>
     public AnalyseCommand(TextWriter stdout, TextWriter stderr)
     {
         _stdout = stdout;
         _stderr = stderr;
-        Command = new Command("analyse", "Analyse an evaluation file: weights, consistency and the fuzzy TOPSIS ranking.");
+        Command = new Command("analyse", "Analyse an evaluation file: weights, consistency, the fuzzy TOPSIS ranking and its robustness.");
         Command.Aliases.Add("analyze");
         Command.Arguments.Add(_file);
         Command.Options.Add(_format);
+        Command.Options.Add(_draws);
+        Command.Options.Add(_seed);
+        Command.Options.Add(_threads);
+        Command.Options.Add(_noRobustness);
         Command.SetAction(parseResult => Execute(
             parseResult.GetValue(_file)!,
-            parseResult.GetValue(_format) == "table" ? AnalyseOutput.Table : AnalyseOutput.Json));
+            parseResult.GetValue(_format) == "table" ? AnalyseOutput.Table : AnalyseOutput.Json,
+            parseResult.GetValue(_noRobustness)
+                ? null
+                : new RobustnessOptions(parseResult.GetValue(_draws), parseResult.GetValue(_seed), parseResult.GetValue(_threads))));
     }
 
     /// <summary>The command to add to the tree.</summary>
     public Command Command { get; }
 
     /// <summary>Reads, analyses and prints; returns an <see cref="ExitCodes"/> value.</summary>
-    public int Execute(string file, AnalyseOutput output) => CommandGuard.Run(_stderr, () =>
+    /// <param name="file">The evaluation file.</param>
+    /// <param name="output">JSON or table.</param>
+    /// <param name="robustness">Settings of the robustness checks; null skips them.</param>
+    public int Execute(string file, AnalyseOutput output, RobustnessOptions? robustness) => CommandGuard.Run(_stderr, () =>
     {
         var input = CommandGuard.ReadEvaluation(file);
-        var result = DecisionEngine.Analyze(input.Evaluation);
+        var prepared = DecisionEngine.Prepare(input.Evaluation);
+        var result = prepared.Analyze();
+        var checks = robustness is null ? null : RobustnessAnalysis.Run(prepared, result, robustness);
         if (output == AnalyseOutput.Table)
         {
-            TableRenderer.Render(input, result, _stdout);
+            TableRenderer.Render(input, result, checks, _stdout);
         }
         else
         {
-            _stdout.Write(ResultsWriter.ToJson(result, input.Evaluation));
+            _stdout.Write(ResultsWriter.ToJson(result, input.Evaluation, checks));
         }
 
         return ExitCodes.Success;
     });
+
+    /// <summary>
+    /// Parses a whole number of at least <paramref name="minimum"/>; anything else is a parse error naming the option,
+    /// what it accepts and what was given.
+    /// </summary>
+    private static Func<ArgumentResult, T> WholeNumber<T>(T minimum, string? note)
+        where T : struct, IBinaryInteger<T>
+    {
+        return result =>
+        {
+            var text = result.Tokens.Count > 0 ? result.Tokens[^1].Value : "";
+            var parsed = T.TryParse(text, NumberStyles.AllowLeadingSign, CultureInfo.InvariantCulture, out var value);
+            if (parsed && value >= minimum)
+            {
+                return value;
+            }
+
+            var option = result.Parent is OptionResult o ? o.Option.Name : "the value";
+            var tooLarge = !parsed && text.TrimStart('+').Length > 0 && text.TrimStart('+').All(char.IsAsciiDigit) ? ", which is too large" : "";
+            result.AddError($"{option} must be a whole number, {minimum} or more{(note is null ? "" : $" ({note})")}; got '{text}'{tooLarge}.");
+            return default;
+        };
+    }
 }

@@ -2,11 +2,15 @@ using System.Globalization;
 using Decide.Core.Analysis;
 using Decide.Core.Fuzzy;
 using Decide.Core.Model;
+using Decide.Core.Robustness;
 using Decide.Interchange;
 
 namespace Decide.Cli;
 
-/// <summary>Prints an analysis as plain-text tables for people: ranking, exclusions, weights and consistency.</summary>
+/// <summary>
+/// Prints an analysis as plain-text tables for people: ranking, exclusions, weights, consistency and, when it was run,
+/// robustness; the caution comes last.
+/// </summary>
 public static class TableRenderer
 {
     /// <summary>The sentence every printed result ends with.</summary>
@@ -14,7 +18,11 @@ public static class TableRenderer
         "Decide supports and does not replace the panel's documented judgement; follow the procurement law and rules that apply to you.";
 
     /// <summary>Writes the tables for <paramref name="result"/>, naming things as <paramref name="file"/> does.</summary>
-    public static void Render(EvaluationFile file, AnalysisResult result, TextWriter output)
+    /// <param name="file">The evaluation file analysed.</param>
+    /// <param name="result">The analysis.</param>
+    /// <param name="robustness">The robustness of the same analysis, or null when it was not run.</param>
+    /// <param name="output">Where to write.</param>
+    public static void Render(EvaluationFile file, AnalysisResult result, RobustnessResult? robustness, TextWriter output)
     {
         ArgumentNullException.ThrowIfNull(file);
         ArgumentNullException.ThrowIfNull(result);
@@ -69,6 +77,11 @@ public static class TableRenderer
         if (result.Consistency.Count > 0)
         {
             RenderConsistency(result.Consistency, output);
+        }
+
+        if (robustness is not null)
+        {
+            RobustnessRenderer.Render(file, result, robustness, output);
         }
 
         output.WriteLine();

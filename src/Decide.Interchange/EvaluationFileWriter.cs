@@ -124,6 +124,8 @@ public static class EvaluationFileWriter
         w.WriteStartObject("options");
         w.WriteString("aggregation", e.Options.Aggregation == AggregationRule.Geometric ? "geometric" : "mean");
         w.WriteString("ideal", e.Options.Ideal == IdealPoints.Extreme ? "extreme" : "unit");
+        w.WriteNumber("divergenceTolerance", e.Options.DivergenceTolerance);
+        w.WriteString("acceptabilityWeights", e.Options.AcceptabilityWeights == AcceptabilityWeights.Uniform ? "uniform" : "fuzzy");
         w.WriteEndObject();
         w.WriteEndObject();
     }

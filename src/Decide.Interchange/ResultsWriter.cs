@@ -5,6 +5,7 @@ using System.Text.Json;
 using Decide.Core.Analysis;
 using Decide.Core.Consistency;
 using Decide.Core.Model;
+using Decide.Core.Robustness;
 using Decide.Interchange.Results;
 
 namespace Decide.Interchange;
@@ -31,7 +32,13 @@ public static class ResultsWriter
         ?? "unknown";
 
     /// <summary>The results document for <paramref name="result"/>, with names taken from <paramref name="evaluation"/>.</summary>
-    public static ResultsDocument CreateDocument(AnalysisResult result, Evaluation evaluation)
+    /// <param name="result">The analysis.</param>
+    /// <param name="evaluation">The evaluation analysed (for names).</param>
+    /// <param name="robustness">
+    /// The robustness of the same analysis, from <see cref="RobustnessAnalysis.Run"/>; when given, the document gets
+    /// its <c>sensitivity</c>, <c>agreement</c> and <c>summary</c> sections.
+    /// </param>
+    public static ResultsDocument CreateDocument(AnalysisResult result, Evaluation evaluation, RobustnessResult? robustness = null)
     {
         ArgumentNullException.ThrowIfNull(result);
         ArgumentNullException.ThrowIfNull(evaluation);
@@ -60,11 +67,15 @@ public static class ResultsWriter
             Matrix = result.Matrix.Select(m => new MatrixEntry(
                 m.Alternative, m.Criterion, m.Aggregated.ToArray(), m.Weighted.ToArray(), m.Raters,
                 m.Declined.Select(d => new DeclinedEntry(d.Assessor, d.Reason)).ToArray())).ToArray(),
+            Sensitivity = robustness is null ? null : RobustnessSections.Sensitivity(robustness.Sensitivity, CriterionName),
+            Agreement = robustness is null ? null : RobustnessSections.Agreement(robustness.Agreement),
+            Summary = robustness?.Summary.ToArray(),
         };
     }
 
-    /// <summary>The results document for an analysis as JSON text.</summary>
-    public static string ToJson(AnalysisResult result, Evaluation evaluation) => ToJson(CreateDocument(result, evaluation));
+    /// <summary>The results document for an analysis (and, when given, its robustness) as JSON text.</summary>
+    public static string ToJson(AnalysisResult result, Evaluation evaluation, RobustnessResult? robustness = null) =>
+        ToJson(CreateDocument(result, evaluation, robustness));
 
     /// <summary>A results document as JSON text (ending with a line break).</summary>
     public static string ToJson(ResultsDocument document)

@@ -29,6 +29,22 @@ public sealed partial class DocumentationTests
         Assert.All(members.Select(m => m.Key), name => Assert.Contains($"`{name}`", Document));
     }
 
+    [Theory]
+    [InlineData("sensitivity")]
+    [InlineData("agreement")]
+    public void Every_member_of_a_robustness_section_is_documented_under_its_heading(string section)
+    {
+        var schema = JsonNode.Parse(File.ReadAllText(RepositoryFiles.PathOf("docs", "schema", "decide-results-1.schema.json")))!;
+        var members = schema["properties"]![section]!["properties"]!.AsObject().Select(m => m.Key).ToArray();
+        var start = Document.IndexOf($"### `{section}`", StringComparison.Ordinal);
+        Assert.True(start >= 0, $"no heading for {section}");
+        var end = Document.IndexOf("\n#", start + 1, StringComparison.Ordinal);
+        var text = Document[start..(end < 0 ? Document.Length : end)];
+
+        Assert.NotEmpty(members);
+        Assert.All(members, name => Assert.Contains($"| `{name}` |", text));
+    }
+
     [GeneratedRegex("```json\\n(.*?)\\n```", RegexOptions.Singleline)]
     private static partial Regex JsonBlock();
 }

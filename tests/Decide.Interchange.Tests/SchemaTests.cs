@@ -1,5 +1,7 @@
 using System.Text.Json;
+using System.Text.Json.Nodes;
 using Decide.Core.Analysis;
+using Decide.Core.Robustness;
 using Json.Schema;
 
 namespace Decide.Interchange.Tests;
@@ -7,12 +9,6 @@ namespace Decide.Interchange.Tests;
 /// <summary>The published JSON Schemas agree with the examples, the samples and what the writers produce.</summary>
 public sealed class SchemaTests
 {
-    private static readonly Lazy<JsonSchema> EvaluationSchema =
-        new(() => JsonSchema.FromFile(RepositoryFiles.PathOf("docs", "schema", "decide-evaluation-1.schema.json")));
-
-    private static readonly Lazy<JsonSchema> ResultsSchema =
-        new(() => JsonSchema.FromFile(RepositoryFiles.PathOf("docs", "schema", "decide-results-1.schema.json")));
-
     /// <summary>The documented example and every file in samples/, as paths relative to the repository.</summary>
     public static TheoryData<string> EvaluationFiles() => [.. EvaluationFilePaths()];
 
@@ -44,7 +40,7 @@ public sealed class SchemaTests
     [MemberData(nameof(EvaluationFiles))]
     public void Every_example_and_sample_matches_the_evaluation_schema(string file)
     {
-        AssertValid(EvaluationSchema.Value, File.ReadAllText(RepositoryFiles.PathOf(file)));
+        AssertValid(Schemas.Evaluation, File.ReadAllText(RepositoryFiles.PathOf(file)));
     }
 
     [Theory]
@@ -55,7 +51,61 @@ public sealed class SchemaTests
 
         var results = ResultsWriter.ToJson(DecisionEngine.Analyze(read.Evaluation), read.Evaluation);
 
-        AssertValid(ResultsSchema.Value, results);
+        AssertValid(Schemas.Results, results);
+    }
+
+    [Theory]
+    [MemberData(nameof(EvaluationFiles))]
+    public void Results_with_robustness_of_every_example_and_sample_match_the_results_schema(string file)
+    {
+        var read = EvaluationFileReader.ReadFile(RepositoryFiles.PathOf(file));
+
+        AssertValid(Schemas.Results, WithRobustness(read));
+    }
+
+    [Fact]
+    public void Results_with_robustness_of_a_pairwise_evaluation_with_uniform_weights_match_the_results_schema()
+    {
+        var read = EvaluationFileReader.Read(Files.Pairwise().Set("options/acceptabilityWeights", "\"uniform\"").ToJsonString());
+
+        var json = WithRobustness(read);
+
+        AssertValid(Schemas.Results, json);
+        Assert.Contains("\"acceptabilityWeights\": \"uniform\"", json);
+    }
+
+    [Theory]
+    [InlineData("agreement", "kendallW")]
+    [InlineData("agreement", "cells")]
+    [InlineData("sensitivity", "sweeps")]
+    [InlineData("sensitivity", "seed")]
+    public void The_results_schema_rejects_robustness_sections_missing_a_fixed_member(string section, string member)
+    {
+        var results = JsonNode.Parse(WithRobustness(EvaluationFileReader.Read(Files.PairwiseText)))!.AsObject();
+        results[section]!.AsObject().Remove(member);
+
+        Assert.False(Schemas.IsValid(Schemas.Results, results.ToJsonString()));
+    }
+
+    [Fact]
+    public void The_results_schema_rejects_an_unknown_member_in_a_robustness_section_and_a_reversal_without_its_pair()
+    {
+        var json = WithRobustness(EvaluationFileReader.ReadFile(RepositoryFiles.PathOf("samples", "bus-stop-displays-importance.json")));
+        var unknown = JsonNode.Parse(json)!.AsObject();
+        unknown["agreement"]!["allCells"] = new JsonArray();
+        var noPair = JsonNode.Parse(json)!.AsObject();
+        var reversal = noPair["sensitivity"]!["sweeps"]!.AsArray().Select(s => s!["reversals"]!.AsArray()).First(r => r.Count > 0)[0]!.AsObject();
+        reversal.Remove("pair");
+
+        Assert.False(Schemas.IsValid(Schemas.Results, unknown.ToJsonString()));
+        Assert.False(Schemas.IsValid(Schemas.Results, noPair.ToJsonString()));
+    }
+
+    private static string WithRobustness(EvaluationFile read)
+    {
+        var prepared = DecisionEngine.Prepare(read.Evaluation);
+        var result = prepared.Analyze();
+        return ResultsWriter.ToJson(result, read.Evaluation, RobustnessAnalysis.Run(prepared, result, new RobustnessOptions(Draws: 300, Seed: 1)));
     }
 
     [Fact]
@@ -63,15 +113,15 @@ public sealed class SchemaTests
     {
         var read = EvaluationFileReader.Read(Files.PairwiseText);
 
-        AssertValid(ResultsSchema.Value, ResultsWriter.ToJson(DecisionEngine.Analyze(read.Evaluation), read.Evaluation));
+        AssertValid(Schemas.Results, ResultsWriter.ToJson(DecisionEngine.Analyze(read.Evaluation), read.Evaluation));
     }
 
     [Fact]
     public void What_the_evaluation_writer_produces_matches_the_evaluation_schema()
     {
-        AssertValid(EvaluationSchema.Value, Files.PairwiseText);
-        AssertValid(EvaluationSchema.Value, EvaluationFileWriter.ToJson(EvaluationFileReader.Read(Files.PairwiseText)));
-        AssertValid(EvaluationSchema.Value, EvaluationFileWriter.ToJson(EvaluationFileReader.Read(Files.MinimalText)));
+        AssertValid(Schemas.Evaluation, Files.PairwiseText);
+        AssertValid(Schemas.Evaluation, EvaluationFileWriter.ToJson(EvaluationFileReader.Read(Files.PairwiseText)));
+        AssertValid(Schemas.Evaluation, EvaluationFileWriter.ToJson(EvaluationFileReader.Read(Files.MinimalText)));
     }
 
     [Theory]
@@ -85,7 +135,7 @@ public sealed class SchemaTests
     {
         var node = Files.Minimal().Set(at, json);
 
-        Assert.False(EvaluationSchema.Value.Evaluate(JsonDocument.Parse(node.ToJsonString()).RootElement).IsValid);
+        Assert.False(Schemas.Evaluation.Evaluate(JsonDocument.Parse(node.ToJsonString()).RootElement).IsValid);
         Assert.NotEmpty(Files.ErrorsOf(node));
     }
 
@@ -93,22 +143,11 @@ public sealed class SchemaTests
     public void The_results_schema_rejects_a_document_without_a_ranking()
     {
         var read = EvaluationFileReader.Read(Files.MinimalText);
-        var results = System.Text.Json.Nodes.JsonNode.Parse(ResultsWriter.ToJson(DecisionEngine.Analyze(read.Evaluation), read.Evaluation))!.AsObject();
+        var results = JsonNode.Parse(ResultsWriter.ToJson(DecisionEngine.Analyze(read.Evaluation), read.Evaluation))!.AsObject();
         results.Remove("ranking");
 
-        Assert.False(ResultsSchema.Value.Evaluate(JsonDocument.Parse(results.ToJsonString()).RootElement).IsValid);
+        Assert.False(Schemas.Results.Evaluate(JsonDocument.Parse(results.ToJsonString()).RootElement).IsValid);
     }
 
-    private static void AssertValid(JsonSchema schema, string json)
-    {
-        using var document = JsonDocument.Parse(json);
-        var result = schema.Evaluate(document.RootElement, new EvaluationOptions { OutputFormat = OutputFormat.List });
-        if (!result.IsValid)
-        {
-            var problems = (result.Details ?? [])
-                .Where(d => d.Errors is { Count: > 0 })
-                .Select(d => $"{d.InstanceLocation}: {string.Join("; ", d.Errors!.Values)}");
-            Assert.Fail("Schema validation failed:\n" + string.Join("\n", problems));
-        }
-    }
+    private static void AssertValid(JsonSchema schema, string json) => Schemas.AssertValid(schema, json);
 }

@@ -102,7 +102,8 @@ public static class RankAcceptabilityAnalysis
         var denominator = 1 + (z2 / draws);
         var centre = (share + (z2 / (2 * draws))) / denominator;
         var half = Z / denominator * Math.Sqrt((share * (1 - share) / draws) + (z2 / (4.0 * draws * draws)));
-        return new ShareInterval(Math.Max(0, centre - half), Math.Min(1, centre + half));
+        // The interval always contains the share; clamping to it keeps rounding from excluding a share of exactly 0 or 1.
+        return new ShareInterval(Math.Min(share, Math.Max(0, centre - half)), Math.Max(share, Math.Min(1, centre + half)));
     }
 
     /// <summary>One block's buffers and tallies.</summary>

@@ -12,7 +12,7 @@ public static class RobustnessAnalysis
     /// <summary>Runs everything.</summary>
     /// <param name="prepared">From <see cref="DecisionEngine.Prepare"/>.</param>
     /// <param name="baseResult">From <see cref="PreparedEvaluation.Analyze"/>.</param>
-    /// <param name="options">Draws, seed, threads.</param>
+    /// <param name="options">Draws, seed, threads. Zero draws skips rank acceptability (its result then has no entries).</param>
     public static RobustnessResult Run(PreparedEvaluation prepared, AnalysisResult baseResult, RobustnessOptions? options = null)
     {
         options ??= new RobustnessOptions();
@@ -20,7 +20,7 @@ public static class RobustnessAnalysis
         var sensitivity = new SensitivityResult(
             sweeps,
             CriticalChanges.Compute(prepared, baseResult, sweeps),
-            prepared.Alternatives.Count > 0
+            prepared.Alternatives.Count > 0 && options.Draws > 0
                 ? RankAcceptabilityAnalysis.Run(prepared, options.Draws, options.Seed, prepared.Source.Options.AcceptabilityWeights, options.Threads)
                 : new AcceptabilityResult(0, options.Seed, prepared.Source.Options.AcceptabilityWeights, [], []),
             LeaveOneOut.Run(prepared, baseResult),

@@ -1,7 +1,7 @@
 namespace Decide.Core.Robustness;
 
 /// <summary>Settings of a robustness run that are not part of the plan.</summary>
-/// <param name="Draws">Monte Carlo draws for rank acceptability (default 10,000).</param>
+/// <param name="Draws">Monte Carlo draws for rank acceptability (default 10,000); 0 skips rank acceptability.</param>
 /// <param name="Seed">Seed of the draws; record it with the results.</param>
 /// <param name="Threads">Maximum threads for the draws; the numbers do not depend on it.</param>
 public sealed record RobustnessOptions(int Draws = RobustnessOptions.DefaultDraws, ulong Seed = RobustnessOptions.DefaultSeed, int Threads = 1)

@@ -34,7 +34,7 @@ internal sealed class EvaluationParser
     private static readonly string[] JudgementMembers = ["row", "col", "tfn", "term"];
     private static readonly string[] RatingMembers = ["term", "rationale", "declined"];
     private static readonly string[] GateMembers = ["passed", "note"];
-    private static readonly string[] OptionMembers = ["aggregation", "ideal"];
+    private static readonly string[] OptionMembers = ["aggregation", "ideal", "divergenceTolerance", "acceptabilityWeights"];
 
     private static readonly (string, CriterionKind)[] Kinds =
         [("linguistic", CriterionKind.Linguistic), ("numeric", CriterionKind.Numeric), ("gate", CriterionKind.Gate)];
@@ -48,6 +48,9 @@ internal sealed class EvaluationParser
         [("mean", AggregationRule.Mean), ("geometric", AggregationRule.Geometric)];
 
     private static readonly (string, IdealPoints)[] Ideals = [("unit", IdealPoints.Unit), ("extreme", IdealPoints.Extreme)];
+
+    private static readonly (string, AcceptabilityWeights)[] AcceptabilityWeightings =
+        [("fuzzy", AcceptabilityWeights.Fuzzy), ("uniform", AcceptabilityWeights.Uniform)];
 
     /// <summary>Stands in for a scale that could not be read, so the rest of the file can still be checked.</summary>
     private static readonly LinguisticScale StandIn = LinguisticScale.Create("stand-in", 1, 2,
@@ -457,9 +460,35 @@ internal sealed class EvaluationParser
             return new AnalysisOptions();
         }
 
+        var defaults = new AnalysisOptions();
         return new AnalysisOptions(
-            f.Choice("aggregation", Aggregations, AggregationRule.Mean, out _),
-            f.Choice("ideal", Ideals, IdealPoints.Unit, out _));
+            f.Choice("aggregation", Aggregations, defaults.Aggregation, out _),
+            f.Choice("ideal", Ideals, defaults.Ideal, out _),
+            f.TryGet("divergenceTolerance", out var tolerance) ? Tolerance(tolerance) ?? defaults.DivergenceTolerance : defaults.DivergenceTolerance,
+            f.Choice("acceptabilityWeights", AcceptabilityWeightings, defaults.AcceptabilityWeights, out _));
+    }
+
+    /// <summary>A number of scale steps: a whole number, 0 or more (2.0 is accepted as 2, as JSON Schema does).</summary>
+    private int? Tolerance(JsonMember member)
+    {
+        if (_in.Number(member.Value, member.Path) is not { } number)
+        {
+            return null;
+        }
+
+        if (number != Math.Floor(number) || number < 0)
+        {
+            _in.Error(member.Path, $"the divergence tolerance is a whole number of scale steps, 0 or more; got {member.Value.GetRawText()}");
+            return null;
+        }
+
+        if (number > int.MaxValue)
+        {
+            _in.Error(member.Path, $"the divergence tolerance {member.Value.GetRawText()} is too large; a scale has far fewer steps");
+            return null;
+        }
+
+        return (int)number;
     }
 
     /// <summary>The model the validator checks: terms of a scale that could not be read are not checked.</summary>

@@ -5,9 +5,10 @@ namespace Decide.Interchange.Results;
 /// (camelCase members; a null member is left out). See docs/evaluation-format.md, "Results document".
 /// </summary>
 /// <remarks>
-/// New sections are added as further nullable properties (for example sensitivity or panel agreement), each with
-/// its own entry records registered in the serialiser context; a section that was not computed stays null and is
-/// not written. Adding a section keeps the format version; renaming or removing a member bumps it.
+/// New sections are added as further nullable properties (as <see cref="Sensitivity"/>, <see cref="Agreement"/> and
+/// <see cref="Summary"/> were), each with its own entry records registered in the serialiser context; a section that
+/// was not computed stays null and is not written. Adding a section keeps the format version; renaming or removing a
+/// member bumps it.
 /// </remarks>
 public sealed record ResultsDocument
 {
@@ -37,4 +38,13 @@ public sealed record ResultsDocument
 
     /// <summary>The decision matrix, cell by cell.</summary>
     public required IReadOnlyList<MatrixEntry> Matrix { get; init; }
+
+    /// <summary>How the ranking responds to changes of weights, ratings, panel, bid set and method; null when robustness was not run.</summary>
+    public SensitivitySection? Sensitivity { get; init; }
+
+    /// <summary>How far the panel agrees; null when robustness was not run.</summary>
+    public AgreementSection? Agreement { get; init; }
+
+    /// <summary>The robustness findings as plain sentences, most important first; null when robustness was not run.</summary>
+    public IReadOnlyList<string>? Summary { get; init; }
 }

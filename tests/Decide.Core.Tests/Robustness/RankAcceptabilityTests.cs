@@ -101,4 +101,16 @@ public sealed class RankAcceptabilityTests
         Assert.Equal(low, interval.Low, 3);
         Assert.Equal(high, interval.High, 3);
     }
+
+    [Theory]
+    [InlineData(0.0, 500)]
+    [InlineData(0.0, 10_000)]
+    [InlineData(1.0, 500)]
+    [InlineData(1.0, 10_000)]
+    public void Wilson_interval_of_a_share_of_0_or_1_starts_or_ends_exactly_there(double share, int n)
+    {
+        var interval = RankAcceptabilityAnalysis.Wilson(share, n);
+        Assert.InRange(share, interval.Low, interval.High);
+        Assert.Equal(share, share == 0 ? interval.Low : interval.High);
+    }
 }

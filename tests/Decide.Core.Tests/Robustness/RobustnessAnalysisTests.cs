@@ -56,4 +56,19 @@ public sealed class RobustnessAnalysisTests
         Assert.Contains(robustness.Summary, s => s.StartsWith("No change of any single criterion", StringComparison.Ordinal));
         Assert.Contains(robustness.Summary, s => s.StartsWith("Removing any single assessor leaves", StringComparison.Ordinal));
     }
+
+    [Fact]
+    public void Zero_draws_skips_rank_acceptability_and_keeps_every_other_section()
+    {
+        var prepared = DecisionEngine.Prepare(RobustnessFixtures.TradeOff());
+        var result = prepared.Analyze();
+        var robustness = RobustnessAnalysis.Run(prepared, result, new RobustnessOptions(Draws: 0, Seed: 5));
+        Assert.Equal(0, robustness.Sensitivity.Acceptability.Draws);
+        Assert.Empty(robustness.Sensitivity.Acceptability.Alternatives);
+        Assert.Empty(robustness.Sensitivity.Acceptability.CentralWeights);
+        Assert.Equal(5UL, robustness.Sensitivity.Acceptability.Seed);
+        Assert.NotEmpty(robustness.Sensitivity.Sweeps);
+        Assert.NotEmpty(robustness.Sensitivity.Methods);
+        Assert.DoesNotContain(robustness.Summary, s => s.Contains("draws", StringComparison.Ordinal));
+    }
 }

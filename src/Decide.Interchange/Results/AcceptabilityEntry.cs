@@ -1,0 +1,7 @@
+namespace Decide.Interchange.Results;
+
+/// <summary>One alternative's rank acceptability indices (SMAA-2).</summary>
+/// <param name="Alternative">Alternative id.</param>
+/// <param name="Ranks">Share of draws giving it rank 1, rank 2, …, rank n (sums to 1).</param>
+/// <param name="Intervals">[low, high]: the 95% Wilson score interval of each share, in the same order.</param>
+public sealed record AcceptabilityEntry(string Alternative, IReadOnlyList<double> Ranks, IReadOnlyList<IReadOnlyList<double>> Intervals);

@@ -1,0 +1,69 @@
+using Decide.Core.Model;
+using Decide.Core.Robustness;
+
+namespace Decide.Interchange.Results;
+
+/// <summary>Turns the engine's robustness results into the <c>sensitivity</c> and <c>agreement</c> sections.</summary>
+internal static class RobustnessSections
+{
+    public static SensitivitySection Sensitivity(SensitivityResult s, Func<string, string> criterionName)
+    {
+        var acceptability = s.Acceptability;
+        return new SensitivitySection(
+            s.Sweeps.Select(w => new SweepEntry(
+                w.Criterion, criterionName(w.Criterion), w.Current, w.Samples.ToArray(),
+                w.Series.Select(x => new SweepSeriesEntry(x.Alternative, x.Closeness.ToArray())).ToArray(),
+                w.Reversals.Select(r => new SweepReversalEntry(r.Weight, [r.Below, r.Above], r.Confirmed)).ToArray(),
+                w.Note)).ToArray(),
+            CriticalChanges(s.CriticalChanges),
+            acceptability.Draws,
+            acceptability.Seed,
+            acceptability.Weights == AcceptabilityWeights.Uniform ? "uniform" : "fuzzy",
+            acceptability.Alternatives.Select(a => new AcceptabilityEntry(
+                a.Alternative, a.Ranks.ToArray(),
+                a.Intervals.Select(i => (IReadOnlyList<double>)[i.Low, i.High]).ToArray())).ToArray(),
+            acceptability.CentralWeights.Select(c => new CentralWeightsEntry(
+                c.Alternative, Map(c.Criteria, c.Weights))).ToArray(),
+            s.LeaveOneOut.Select(l => new LeaveOneOutEntry(l.Assessor, l.Winner, l.Ranking.ToArray(), l.WinnerChanged, l.Problem)).ToArray(),
+            s.WithoutAlternative.Select(w => new WithoutAlternativeEntry(
+                w.Alternative, w.Ranking.ToArray(),
+                w.Reversals.Select(r => new OrderReversalEntry(r.WasAhead, r.NowAhead)).ToArray())).ToArray(),
+            s.Methods.Select(m => new MethodComparisonEntry(
+                m.Method, m.Description, m.Ranking.ToArray(), m.Scores.ToArray(), m.KendallTau, m.SameWinner)).ToArray());
+    }
+
+    public static AgreementSection Agreement(PanelAgreementResult a)
+    {
+        var w = a.Concordance;
+        return new AgreementSection(
+            w?.W, w?.ChiSquare, w?.PValue, w?.DegreesOfFreedom, a.Tolerance,
+            a.ForDiscussion.Select(c => new CellSpreadEntry(
+                c.Alternative, c.Criterion, c.Spread, Map(c.Terms.Select(t => t.Assessor), c.Terms.Select(t => t.Term)))).ToArray(),
+            a.Assessors.Select(x => new AssessorAgreementEntry(
+                x.Assessor, x.Ranking.ToArray(),
+                Map(x.Closeness.Select(c => c.Alternative), x.Closeness.Select(c => c.Closeness)),
+                x.CellsRated, x.MeanDistance, x.TauWithPanel)).ToArray());
+    }
+
+    private static CriticalChangesEntry CriticalChanges(CriticalChangesResult c) => new(
+        c.Changes.Select(x => new CriticalChangeEntry(
+            x.Criterion, [x.Leader, x.Challenger], x.Current, x.Weight, x.Absolute, x.Relative, x.Reverses,
+            x.Reverses ? null : CriticalChange.NoReversal)).ToArray(),
+        new MostCriticalEntry(Most(c.TopAbsolute), Most(c.TopRelative), Most(c.AnyAbsolute), Most(c.AnyRelative)));
+
+    private static MostCriticalCriterionEntry? Most(MostCriticalCriterion? m) => m is null
+        ? null
+        : new MostCriticalCriterionEntry(m.Criterion, [m.Leader, m.Challenger], m.Current, m.Weight, m.Absolute, m.Relative);
+
+    /// <summary>Pairs keys with values, keeping their order (the first of a repeated key wins).</summary>
+    private static Dictionary<string, T> Map<T>(IEnumerable<string> keys, IEnumerable<T> values)
+    {
+        var map = new Dictionary<string, T>(StringComparer.Ordinal);
+        foreach (var (key, value) in keys.Zip(values))
+        {
+            map.TryAdd(key, value);
+        }
+
+        return map;
+    }
+}
