@@ -70,8 +70,10 @@ public sealed record MatrixConsistency(
 /// <param name="Weighted">ṽ: normalised and weighted.</param>
 /// <param name="Raters">How many assessors' ratings went into it (0 for a numeric criterion).</param>
 /// <param name="Declined">Who declined it and why.</param>
+/// <param name="Moderated">The moderated term that replaced the raters' aggregate, if the panel moderated this cell.</param>
 public sealed record MatrixCell(
-    string Alternative, string Criterion, Tfn Aggregated, Tfn Weighted, int Raters, IReadOnlyList<DeclinedCell> Declined);
+    string Alternative, string Criterion, Tfn Aggregated, Tfn Weighted, int Raters, IReadOnlyList<DeclinedCell> Declined,
+    string? Moderated = null);
 
 /// <summary>A cell an assessor declined, with their reason.</summary>
 public sealed record DeclinedCell(string Assessor, string Reason);

@@ -65,7 +65,8 @@ public static class EvaluationValidator
             }
 
             Values(excluded);
-            Ratings(excluded);
+            var moderated = Moderation();
+            Ratings(excluded, moderated);
         }
 
         private void Add(string path, string reason) => _found.Add(new EvaluationError(path, reason));
@@ -509,7 +510,58 @@ public static class EvaluationValidator
             }
         }
 
-        private void Ratings(HashSet<string> excluded)
+        private HashSet<(string, string)> Moderation()
+        {
+            var seen = new HashSet<(string, string)>();
+            foreach (var m in e.Moderated)
+            {
+                var at = JsonPath.Keys("$.moderation", m.Alternative, m.Criterion);
+                if (!_alternatives.Contains(m.Alternative))
+                {
+                    Add(JsonPath.Key("$.moderation", m.Alternative), $"unknown alternative \"{m.Alternative}\"");
+                    continue;
+                }
+
+                if (!_criteria.TryGetValue(m.Criterion, out var criterion))
+                {
+                    Add(at, $"unknown criterion \"{m.Criterion}\"");
+                    continue;
+                }
+
+                if (criterion.Kind != CriterionKind.Linguistic)
+                {
+                    Add(at, $"criterion \"{m.Criterion}\" is {Describe(criterion.Kind)}; only linguistic ratings are moderated");
+                    continue;
+                }
+
+                if (!seen.Add((m.Alternative, m.Criterion)))
+                {
+                    Add(at, "this cell is moderated twice");
+                }
+
+                if (!e.RatingScale.TryFind(m.Term, out _))
+                {
+                    Add($"{at}.term", $"unknown term \"{m.Term}\"; the rating scale has {e.RatingScale.CodeList}");
+                }
+
+                if (string.IsNullOrWhiteSpace(m.Reason))
+                {
+                    Add($"{at}.reason", "a moderated value needs the reason the panel agreed on it");
+                }
+
+                foreach (var agreed in m.AgreedBy ?? [])
+                {
+                    if (!_assessors.ContainsKey(agreed))
+                    {
+                        Add($"{at}.agreedBy", $"unknown assessor \"{agreed}\"");
+                    }
+                }
+            }
+
+            return seen;
+        }
+
+        private void Ratings(HashSet<string> excluded, HashSet<(string, string)> moderated)
         {
             var cells = new Dictionary<(string Assessor, string Alternative, string Criterion), Rating>();
             foreach (var rating in e.Ratings)
@@ -595,7 +647,7 @@ public static class EvaluationValidator
                         }
                     }
 
-                    if (rated == 0)
+                    if (rated == 0 && !moderated.Contains((alternative.Id, criterion.Id)))
                     {
                         var why = declined.Count > 0 ? $" (declined by {string.Join("; ", declined)})" : " (no assessor is assigned to it)";
                         Add(JsonPath.Keys("$.ratings.*", alternative.Id, criterion.Id),

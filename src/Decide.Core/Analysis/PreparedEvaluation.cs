@@ -64,6 +64,15 @@ public sealed class PreparedEvaluation
             }
         }
 
+        ModeratedTerms = new string?[n * m];
+        foreach (var moderated in source.Moderated)
+        {
+            if (altIndex.TryGetValue(moderated.Alternative, out var i))
+            {
+                ModeratedTerms[(i * m) + critIndex[moderated.Criterion]] = moderated.Term;
+            }
+        }
+
         AssessorWeights = Assessors.Select(a => a.Weight).ToArray();
         (Weights, Consistency) = CriterionWeights.Derive(source, Criteria);
         FuzzyWeights = Weights.Select(w => w.Fuzzy).ToArray();
@@ -112,6 +121,9 @@ public sealed class PreparedEvaluation
     /// <summary>Assessor weights as given in the plan.</summary>
     public double[] AssessorWeights { get; }
 
+    /// <summary>Per cell, the moderated term that replaces the aggregate, or null (alternative-major).</summary>
+    public string?[] ModeratedTerms { get; }
+
     internal List<DeclinedCell>?[] Declines { get; }
 
     /// <summary>
@@ -134,6 +146,13 @@ public sealed class PreparedEvaluation
                 if (Criteria[j].Kind == CriterionKind.Numeric)
                 {
                     matrix[cell] = Tfn.Crisp(Values[cell]);
+                    continue;
+                }
+
+                if (ModeratedTerms[cell] is { } agreed)
+                {
+                    scale.TryFind(agreed, out var agreedStep);
+                    matrix[cell] = scale[agreedStep].Value;
                     continue;
                 }
 
@@ -184,7 +203,7 @@ public sealed class PreparedEvaluation
                 }
 
                 cells.Add(new MatrixCell(Alternatives[i].Id, Criteria[j].Id, Matrix[cell], weighted[cell], raters,
-                    (IReadOnlyList<DeclinedCell>?)Declines[cell] ?? []));
+                    (IReadOnlyList<DeclinedCell>?)Declines[cell] ?? [], ModeratedTerms[cell]));
             }
         }
 

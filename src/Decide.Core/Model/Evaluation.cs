@@ -72,6 +72,17 @@ public sealed record NumericValue(string Alternative, string Criterion, double V
 /// <summary>The outcome of a gate (pass/fail) criterion for one alternative.</summary>
 public sealed record GateResult(string Alternative, string Criterion, bool Passed, string? Note = null);
 
+/// <summary>
+/// The panel's agreed value for one cell after moderation. The individual ratings stay as they were; the moderated
+/// term replaces their aggregate in the decision matrix.
+/// </summary>
+/// <param name="Alternative">Alternative id.</param>
+/// <param name="Criterion">Linguistic criterion id.</param>
+/// <param name="Term">The agreed term of the rating scale.</param>
+/// <param name="Reason">Why the panel agreed on it (the minute of the discussion).</param>
+/// <param name="AgreedBy">Assessor ids who agreed, if recorded.</param>
+public sealed record ModeratedRating(string Alternative, string Criterion, string Term, string Reason, IReadOnlyList<string>? AgreedBy = null);
+
 /// <summary>Choices of method fixed in the plan.</summary>
 /// <param name="Aggregation">How assessors' TFNs are combined.</param>
 /// <param name="Ideal">Ideal points of fuzzy TOPSIS.</param>
@@ -137,6 +148,9 @@ public sealed record Evaluation
 
     /// <summary>Results of gate criteria.</summary>
     public IReadOnlyList<GateResult> Gates { get; init; } = [];
+
+    /// <summary>Moderated values agreed by the panel (may be empty).</summary>
+    public IReadOnlyList<ModeratedRating> Moderated { get; init; } = [];
 
     /// <summary>Method choices.</summary>
     public AnalysisOptions Options { get; init; } = new();
