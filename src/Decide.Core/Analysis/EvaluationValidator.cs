@@ -20,6 +20,17 @@ public static class EvaluationValidator
         return v.Errors;
     }
 
+    /// <summary>
+    /// Checks the plan alone — title, scales, groups, criteria and options — before any panel, bid or input exists
+    /// (the service's setup stage). Alternatives, assessors and inputs are ignored.
+    /// </summary>
+    public static IReadOnlyList<EvaluationError> ValidatePlan(Evaluation evaluation)
+    {
+        var v = new Walker(evaluation, planOnly: true);
+        v.Run();
+        return v.Errors;
+    }
+
     /// <summary>Throws <see cref="InvalidEvaluationException"/> listing every problem, if there is any.</summary>
     public static void EnsureValid(Evaluation evaluation)
     {
@@ -30,7 +41,7 @@ public static class EvaluationValidator
         }
     }
 
-    private sealed class Walker(Evaluation e)
+    private sealed class Walker(Evaluation e, bool planOnly = false)
     {
         private readonly List<EvaluationError> _found = [];
         private readonly Dictionary<string, Criterion> _criteria = new(StringComparer.Ordinal);
@@ -51,6 +62,11 @@ public static class EvaluationValidator
             if (e.Options.DivergenceTolerance < 0)
             {
                 Add("$.options.divergenceTolerance", $"the divergence tolerance is a number of scale steps, 0 or more; got {e.Options.DivergenceTolerance}");
+            }
+
+            if (planOnly)
+            {
+                return;
             }
 
             var excluded = Gates();
@@ -153,7 +169,7 @@ public static class EvaluationValidator
                 }
             }
 
-            if (e.Alternatives.Count == 0)
+            if (e.Alternatives.Count == 0 && !planOnly)
             {
                 Add("$.alternatives", "the evaluation needs at least one alternative");
             }
@@ -173,7 +189,7 @@ public static class EvaluationValidator
                 }
             }
 
-            if (e.Assessors.Count == 0)
+            if (e.Assessors.Count == 0 && !planOnly)
             {
                 Add("$.assessors", "the evaluation needs at least one assessor");
             }
