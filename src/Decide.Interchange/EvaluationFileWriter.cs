@@ -14,8 +14,8 @@ namespace Decide.Interchange;
 /// <remarks>
 /// The writer does not validate: a draft that cannot be analysed yet is written as it is, and the reader reports
 /// its problems. Built-in scales are written by name; a pairwise judgement keeps its scale code when the code still
-/// stands for the judgement's value. Ratings, importance ratings, judgements, values and gate results are grouped
-/// by assessor (or alternative) in the order they first appear. Extension members (<c>x-…</c>) of a file that was
+/// stands for the judgement's value. Ratings, importance ratings, judgements, moderated values, values and gate
+/// results are grouped by assessor (or alternative) in the order they first appear. Extension members (<c>x-…</c>) of a file that was
 /// read are not kept.
 /// </remarks>
 public static class EvaluationFileWriter
@@ -118,6 +118,7 @@ public static class EvaluationFileWriter
         WriteImportance(w, e.Importance);
         WritePairwise(w, e.Pairwise, e.PairwiseScale);
         WriteRatings(w, e.Ratings);
+        WriteModeration(w, e.Moderated);
         WriteValues(w, e.Values);
         WriteGates(w, e.Gates);
 
@@ -316,6 +317,42 @@ public static class EvaluationFileWriter
                     WriteOptional(w, "declined", rating.Declined);
                     WriteOptional(w, "rationale", rating.Rationale);
                     w.WriteEndObject();
+                }
+
+                w.WriteEndObject();
+            }
+
+            w.WriteEndObject();
+        }
+
+        w.WriteEndObject();
+    }
+
+    private static void WriteModeration(Utf8JsonWriter w, IReadOnlyList<ModeratedRating> moderated)
+    {
+        if (moderated.Count == 0)
+        {
+            return;
+        }
+
+        w.WriteStartObject("moderation");
+        foreach (var byAlternative in moderated.GroupBy(m => m.Alternative, StringComparer.Ordinal))
+        {
+            w.WriteStartObject(byAlternative.Key);
+            foreach (var cell in byAlternative)
+            {
+                w.WriteStartObject(cell.Criterion);
+                w.WriteString("term", cell.Term);
+                w.WriteString("reason", cell.Reason);
+                if (cell.AgreedBy is { } agreedBy)
+                {
+                    w.WriteStartArray("agreedBy");
+                    foreach (var assessor in agreedBy)
+                    {
+                        w.WriteStringValue(assessor);
+                    }
+
+                    w.WriteEndArray();
                 }
 
                 w.WriteEndObject();

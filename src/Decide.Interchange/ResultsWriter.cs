@@ -66,7 +66,7 @@ public static class ResultsWriter
             Consistency = result.Consistency.Select(Consistency).ToArray(),
             Matrix = result.Matrix.Select(m => new MatrixEntry(
                 m.Alternative, m.Criterion, m.Aggregated.ToArray(), m.Weighted.ToArray(), m.Raters,
-                m.Declined.Select(d => new DeclinedEntry(d.Assessor, d.Reason)).ToArray())).ToArray(),
+                m.Declined.Select(d => new DeclinedEntry(d.Assessor, d.Reason)).ToArray(), m.Moderated)).ToArray(),
             Sensitivity = robustness is null ? null : RobustnessSections.Sensitivity(robustness.Sensitivity, CriterionName),
             Agreement = robustness is null ? null : RobustnessSections.Agreement(robustness.Agreement),
             Summary = robustness?.Summary.ToArray(),

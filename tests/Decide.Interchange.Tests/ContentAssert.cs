@@ -28,6 +28,7 @@ internal static class ContentAssert
         SameItems(expected.Importance, actual.Importance);
         SameItems(expected.Pairwise, actual.Pairwise);
         SameItems(expected.Ratings, actual.Ratings);
+        SameItems(expected.Moderated.Select(Flat).ToArray(), actual.Moderated.Select(Flat).ToArray());
         SameItems(expected.Values, actual.Values);
         SameItems(expected.Gates, actual.Gates);
     }
@@ -48,6 +49,9 @@ internal static class ContentAssert
 
     private static string Flat(Assessor a) =>
         $"{a with { Criteria = null }} criteria: {(a.Criteria is null ? "all" : string.Join(", ", a.Criteria))}";
+
+    private static string Flat(ModeratedRating m) =>
+        $"{m with { AgreedBy = null }} agreed by: {(m.AgreedBy is null ? "not recorded" : $"[{string.Join(", ", m.AgreedBy)}]")}";
 
     private static IEnumerable<string> Sorted(IReadOnlyDictionary<string, string>? map) =>
         (map ?? new Dictionary<string, string>()).Select(kv => $"{kv.Key}={kv.Value}").Order(StringComparer.Ordinal);

@@ -45,6 +45,19 @@ public sealed partial class DocumentationTests
         Assert.All(members, name => Assert.Contains($"| `{name}` |", text));
     }
 
+    [Fact]
+    public void The_documented_moderation_reads_when_added_to_the_minimal_example()
+    {
+        var section = Document[Document.IndexOf("### `moderation`", StringComparison.Ordinal)..];
+        var block = JsonBlock().Match(section);
+        Assert.True(block.Success, "no JSON block under \"moderation\"");
+        var moderation = JsonNode.Parse("{" + block.Groups[1].Value + "}")!["moderation"]!.ToJsonString();
+
+        var file = EvaluationFileReader.Read(Files.Minimal().Set("moderation", moderation).ToJsonString());
+
+        Assert.Single(file.Evaluation.Moderated);
+    }
+
     [GeneratedRegex("```json\\n(.*?)\\n```", RegexOptions.Singleline)]
     private static partial Regex JsonBlock();
 }

@@ -7,7 +7,8 @@ namespace Decide.Core.Robustness;
 /// Re-ranks without each assessor in turn, to show whether one person's judgements decide the winner.
 /// </summary>
 /// <remarks>
-/// The assessor's ratings, importance ratings and pairwise judgements are all removed and the whole analysis is
+/// The assessor's ratings, importance ratings and pairwise judgements are all removed (moderated values stay, as the
+/// panel's, with the assessor taken off their list of who agreed) and the whole analysis is
 /// re-run (validation included), so weights are re-derived from the remaining panel. When that is impossible
 /// (a cell only they rated, the only one who gave weights) the entry says why instead of imputing.
 /// </remarks>
@@ -51,6 +52,11 @@ public static class LeaveOneOut
         Ratings = source.Ratings.Where(r => r.Assessor != assessor).ToArray(),
         Importance = source.Importance.Where(r => r.Assessor != assessor).ToArray(),
         Pairwise = source.Pairwise.Where(p => p.Assessor != assessor).ToArray(),
+
+        // A moderated value is the panel's agreement, not one assessor's judgement: it stays, without their name.
+        Moderated = source.Moderated.Select(m => m.AgreedBy is { } agreed && agreed.Contains(assessor)
+            ? m with { AgreedBy = agreed.Where(a => a != assessor).ToArray() }
+            : m).ToArray(),
     };
 
     private static HashSet<string> Winners(AnalysisResult result) =>

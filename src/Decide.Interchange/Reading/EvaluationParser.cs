@@ -24,7 +24,7 @@ internal sealed class EvaluationParser
     [
         "format", "title", "reference", "organisation", "description", "noun", "ratingScale", "importanceScale",
         "pairwiseScale", "groups", "criteria", "alternatives", "assessors", "weighting", "importance", "pairwise",
-        "ratings", "values", "gates", "options",
+        "ratings", "moderation", "values", "gates", "options",
     ];
 
     private static readonly string[] GroupMembers = ["id", "name"];
@@ -33,6 +33,7 @@ internal sealed class EvaluationParser
     private static readonly string[] AssessorMembers = ["id", "name", "weight", "criteria"];
     private static readonly string[] JudgementMembers = ["row", "col", "tfn", "term"];
     private static readonly string[] RatingMembers = ["term", "rationale", "declined"];
+    private static readonly string[] ModeratedMembers = ["term", "reason", "agreedBy"];
     private static readonly string[] GateMembers = ["passed", "note"];
     private static readonly string[] OptionMembers = ["aggregation", "ideal", "divergenceTolerance", "acceptabilityWeights"];
 
@@ -117,6 +118,7 @@ internal sealed class EvaluationParser
             Importance = Importance(top),
             Pairwise = Pairwise(top, pairwiseScale),
             Ratings = Ratings(top),
+            Moderated = Moderation(top),
             Values = Values(top),
             Gates = Gates(top),
             Options = Options(top),
@@ -391,6 +393,61 @@ internal sealed class EvaluationParser
         _in.Cover(JsonPath.Keys("$.ratings.*", alternative, cell.Name));
     }
 
+    private List<ModeratedRating> Moderation(JsonFields top)
+    {
+        var result = new List<ModeratedRating>();
+        if (!top.TryGet("moderation", out var member))
+        {
+            return result;
+        }
+
+        foreach (var alternative in _in.Members(member.Value, member.Path, "an object {alternativeId: {criterionId: moderated value}}") ?? [])
+        {
+            foreach (var cell in _in.Members(alternative.Value, alternative.Path, "an object {criterionId: moderated value}") ?? [])
+            {
+                if (Moderated(alternative.Name, cell) is { } moderated)
+                {
+                    result.Add(moderated);
+                }
+            }
+        }
+
+        return result;
+    }
+
+    /// <summary>
+    /// A moderated value. Without a readable term it is left out, and the engine's "nobody rated" for a cell everyone
+    /// declined follows from that, so it is not reported again. A missing reason is read as empty: the validator's
+    /// complaint about it sits at the place already reported.
+    /// </summary>
+    private ModeratedRating? Moderated(string alternative, JsonMember cell)
+    {
+        var f = _in.Fields(cell.Value, cell.Path, ModeratedMembers, expected: "a moderated value {\"term\", \"reason\", \"agreedBy\"}");
+        var term = f?.String("term", "the term of the rating scale the panel agreed on");
+        var reason = f?.String("reason", "why the panel agreed on the term, written as a minute a bidder may read");
+        List<string>? agreedBy = null;
+        if (f is not null && f.TryGet("agreedBy", out var list))
+        {
+            agreedBy = [];
+            foreach (var (_, item, at) in _in.Items(list.Value, list.Path))
+            {
+                if (_in.String(item, at) is { } assessor)
+                {
+                    agreedBy.Add(assessor);
+                }
+            }
+        }
+
+        if (term is null)
+        {
+            _in.Cover(cell.Path);
+            _in.Cover(JsonPath.Keys("$.ratings.*", alternative, cell.Name));
+            return null;
+        }
+
+        return new ModeratedRating(alternative, cell.Name, term, reason ?? "", agreedBy);
+    }
+
     private List<NumericValue> Values(JsonFields top)
     {
         var result = new List<NumericValue>();
@@ -500,6 +557,7 @@ internal sealed class EvaluationParser
             {
                 RatingScale = StandIn,
                 Ratings = e.Ratings.Select(r => r.Term is null ? r : r with { Term = StandIn[0].Code }).ToArray(),
+                Moderated = e.Moderated.Select(m => m with { Term = StandIn[0].Code }).ToArray(),
                 Criteria = e.Criteria.Select(c => c with { Descriptors = null }).ToArray(),
             };
         }

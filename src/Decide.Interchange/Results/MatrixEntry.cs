@@ -7,10 +7,15 @@ namespace Decide.Interchange.Results;
 /// <param name="Weighted">Normalised and weighted [l, m, u].</param>
 /// <param name="Raters">How many assessors' ratings went into it (0 for a numeric criterion).</param>
 /// <param name="Declined">Who declined the cell and why.</param>
+/// <param name="Moderated">
+/// The term the panel agreed on when it moderated the cell (<see cref="Aggregated"/> is then that term's value), or
+/// null; left out of the document when null.
+/// </param>
 public sealed record MatrixEntry(
     string Alternative,
     string Criterion,
     IReadOnlyList<double> Aggregated,
     IReadOnlyList<double> Weighted,
     int Raters,
-    IReadOnlyList<DeclinedEntry> Declined);
+    IReadOnlyList<DeclinedEntry> Declined,
+    string? Moderated = null);

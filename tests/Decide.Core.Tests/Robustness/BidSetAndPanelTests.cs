@@ -1,6 +1,7 @@
 using Decide.Core.Analysis;
 using Decide.Core.Model;
 using Decide.Core.Robustness;
+using Decide.Core.Tests.Published;
 
 namespace Decide.Core.Tests.Robustness;
 
@@ -92,5 +93,23 @@ public sealed class BidSetAndPanelTests
         var loo = LeaveOneOut.Run(prepared, prepared.Analyze());
         Assert.Null(loo[0].Winner);
         Assert.Contains("nobody rated", loo[0].Problem);
+    }
+
+    [Fact]
+    public void Leaving_out_an_assessor_who_agreed_a_moderated_value_keeps_the_panels_value_and_ranks()
+    {
+        var evaluation = Chen2000WorkedExample.Build() with
+        {
+            Moderated = [new ModeratedRating("A1", "C5", "G", "the panel agreed the references show steady self-confidence", ["D1", "D2"])],
+        };
+        var prepared = DecisionEngine.Prepare(evaluation);
+
+        var loo = LeaveOneOut.Run(prepared, prepared.Analyze());
+
+        Assert.All(loo, l => Assert.Null(l.Problem));
+        Assert.All(loo, l => Assert.Equal(3, l.Ranking.Count));
+        var kept = Assert.Single(LeaveOneOut.Without(evaluation, "D1").Moderated);
+        Assert.Equal("G", kept.Term);
+        Assert.Equal(["D2"], kept.AgreedBy!);
     }
 }
