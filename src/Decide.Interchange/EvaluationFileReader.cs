@@ -34,6 +34,18 @@ public static partial class EvaluationFileReader
         return EvaluationParser.Parse(document.RootElement);
     }
 
+    /// <summary>
+    /// Reads a plan: an evaluation document whose panel, alternatives and inputs may be absent (they are read if
+    /// present but not checked). Used while an evaluation is set up, before anyone rates.
+    /// </summary>
+    /// <exception cref="InvalidEvaluationException">The plan has problems; every one is listed.</exception>
+    public static EvaluationFile ReadPlan(string json)
+    {
+        ArgumentNullException.ThrowIfNull(json);
+        using var document = Parse(() => JsonDocument.Parse(json, Options));
+        return EvaluationParser.ParsePlan(document.RootElement);
+    }
+
     /// <summary>Reads an evaluation from UTF-8 bytes (a leading byte-order mark is allowed).</summary>
     /// <exception cref="InvalidEvaluationException">The bytes are not a valid evaluation; every problem is listed.</exception>
     public static EvaluationFile Read(ReadOnlyMemory<byte> utf8Json)

@@ -65,12 +65,22 @@ internal sealed class EvaluationParser
     private bool _pairwiseScaleUsable = true;
     private bool _weightingUnreadable;
 
-    private EvaluationParser()
+    private readonly bool _planOnly;
+
+    private EvaluationParser(bool planOnly)
     {
+        _planOnly = planOnly;
     }
 
     /// <exception cref="InvalidEvaluationException">The document has problems; every one is listed.</exception>
-    public static EvaluationFile Parse(JsonElement root) => new EvaluationParser().Run(root);
+    public static EvaluationFile Parse(JsonElement root) => new EvaluationParser(planOnly: false).Run(root);
+
+    /// <summary>
+    /// Reads a plan: the same document, in which alternatives, assessors and inputs may be absent; only the plan
+    /// (title, scales, groups, criteria, weighting, options) is validated.
+    /// </summary>
+    /// <exception cref="InvalidEvaluationException">The plan has problems; every one is listed.</exception>
+    public static EvaluationFile ParsePlan(JsonElement root) => new EvaluationParser(planOnly: true).Run(root);
 
     private EvaluationFile Run(JsonElement root)
     {
@@ -92,9 +102,9 @@ internal sealed class EvaluationParser
             f.String("id", "the group's id") is { } id ? new CriterionGroup(id, f.String("name", "the group's name") ?? "") : null);
         var descriptions = new Dictionary<string, string>(StringComparer.Ordinal);
         var criteria = List(top, "criteria", CriterionMembers, required: true, (f, _) => Criterion(f, descriptions));
-        var alternatives = List(top, "alternatives", AlternativeMembers, required: true, (f, _) =>
+        var alternatives = List(top, "alternatives", AlternativeMembers, required: !_planOnly, (f, _) =>
             f.String("id", "the alternative's id") is { } id ? new Alternative(id, f.String("name", "the alternative's name") ?? "") : null);
-        var assessors = List(top, "assessors", AssessorMembers, required: true, Assessor);
+        var assessors = List(top, "assessors", AssessorMembers, required: !_planOnly, Assessor);
 
         var weighting = top.Choice("weighting", Weightings, WeightingMethod.Importance, out var weightingReadable);
         if (!weightingReadable)
@@ -125,7 +135,8 @@ internal sealed class EvaluationParser
         };
 
         var errors = new List<EvaluationError>(_in.Errors);
-        foreach (var error in EvaluationValidator.Validate(ForValidation(evaluation)))
+        var found = _planOnly ? EvaluationValidator.ValidatePlan(ForValidation(evaluation)) : EvaluationValidator.Validate(ForValidation(evaluation));
+        foreach (var error in found)
         {
             var path = _paths.ToFile(error.Path);
             if (!IsConsequence(path))

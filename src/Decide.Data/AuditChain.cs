@@ -1,0 +1,146 @@
+using System.Globalization;
+using System.Security.Cryptography;
+using System.Text;
+using Decide.Data.Entities;
+using Microsoft.EntityFrameworkCore;
+
+namespace Decide.Data;
+
+/// <summary>What happened, by whom, to what: the content of an audit entry before it is chained.</summary>
+public sealed record AuditEvent(string Action, string? Target = null, string? OldValue = null, string? NewValue = null);
+
+/// <summary>One problem found when verifying a chain.</summary>
+/// <param name="Chain">The chain.</param>
+/// <param name="Index">The position at which the chain breaks.</param>
+/// <param name="EntryId">The database id of the entry involved, when there is one.</param>
+/// <param name="Kind">"edited", "deleted" or "inserted".</param>
+/// <param name="Detail">A sentence for the auditor.</param>
+public sealed record AuditBreak(string Chain, long Index, long? EntryId, string Kind, string Detail);
+
+/// <summary>The result of verifying audit chains.</summary>
+/// <param name="Valid">True when every chain is intact.</param>
+/// <param name="Entries">Entries checked.</param>
+/// <param name="Chains">Chains checked.</param>
+/// <param name="Breaks">Every break found, in chain and index order.</param>
+public sealed record AuditVerification(bool Valid, long Entries, int Chains, IReadOnlyList<AuditBreak> Breaks);
+
+/// <summary>
+/// Appends to and verifies the hash-chained audit trail. Each entry's hash is SHA-256 over a canonical text of its
+/// chain, index, time, user, action, target, old and new values and the previous entry's hash.
+/// </summary>
+public static class AuditChain
+{
+    /// <summary>The chain for events that belong to no evaluation (sign-ins, accounts).</summary>
+    public const string SystemChain = "system";
+
+    /// <summary>The previous hash of the first entry of a chain.</summary>
+    public static readonly string Genesis = new('0', 64);
+
+    /// <summary>
+    /// Adds the entry for <paramref name="e"/> to <paramref name="db"/> (not yet saved), after the last entry of
+    /// the chain as currently stored or already added in this context. Save it in the same SaveChanges as the
+    /// change it records; if another writer took the same index first, the unique index rejects the save and the
+    /// caller retries.
+    /// </summary>
+    public static async Task<AuditEntry> AppendAsync(
+        DecideDbContext db, string chain, AuditEvent e, string? userId, string? userName, DateTimeOffset at, CancellationToken ct = default)
+    {
+        var pending = db.ChangeTracker.Entries<AuditEntry>()
+            .Where(x => x.State == EntityState.Added && x.Entity.Chain == chain)
+            .Select(x => x.Entity)
+            .OrderByDescending(x => x.Index)
+            .FirstOrDefault();
+        var last = pending ?? await db.Audit.AsNoTracking()
+            .Where(x => x.Chain == chain)
+            .OrderByDescending(x => x.Index)
+            .FirstOrDefaultAsync(ct);
+
+        var entry = new AuditEntry
+        {
+            Chain = chain,
+            Index = (last?.Index ?? 0) + 1,
+            At = at,
+            UserId = userId,
+            UserName = userName,
+            Action = e.Action,
+            Target = e.Target,
+            OldValue = e.OldValue,
+            NewValue = e.NewValue,
+            PreviousHash = last?.Hash ?? Genesis,
+        };
+        entry.Hash = HashOf(entry);
+        db.Audit.Add(entry);
+        return entry;
+    }
+
+    /// <summary>Verifies one chain, or every chain when <paramref name="chain"/> is null.</summary>
+    public static async Task<AuditVerification> VerifyAsync(DecideDbContext db, string? chain = null, CancellationToken ct = default)
+    {
+        var query = db.Audit.AsNoTracking();
+        if (chain is not null)
+        {
+            query = query.Where(x => x.Chain == chain);
+        }
+
+        var entries = await query.OrderBy(x => x.Chain).ThenBy(x => x.Index).ThenBy(x => x.Id).ToListAsync(ct);
+        var breaks = new List<AuditBreak>();
+        foreach (var group in entries.GroupBy(x => x.Chain))
+        {
+            breaks.AddRange(VerifyChain(group.Key, group.ToList()));
+        }
+
+        return new AuditVerification(breaks.Count == 0, entries.Count, entries.Select(x => x.Chain).Distinct().Count(), breaks);
+    }
+
+    /// <summary>Checks one chain's entries (ordered by index) and names each break.</summary>
+    public static IEnumerable<AuditBreak> VerifyChain(string chain, IReadOnlyList<AuditEntry> entries)
+    {
+        var expectedIndex = 1L;
+        var previousHash = Genesis;
+        foreach (var entry in entries)
+        {
+            if (entry.Index > expectedIndex)
+            {
+                yield return new AuditBreak(chain, expectedIndex, null, "deleted",
+                    $"entries {expectedIndex}–{entry.Index - 1} of chain {chain} are missing");
+            }
+            else if (entry.Index < expectedIndex)
+            {
+                yield return new AuditBreak(chain, entry.Index, entry.Id, "inserted",
+                    $"entry {entry.Id} repeats position {entry.Index} of chain {chain}");
+                continue;
+            }
+
+            if (HashOf(entry) != entry.Hash)
+            {
+                yield return new AuditBreak(chain, entry.Index, entry.Id, "edited",
+                    $"entry {entry.Index} of chain {chain} ({entry.Action}) does not match its hash: its content was changed after it was written");
+            }
+            else if (entry.PreviousHash != previousHash)
+            {
+                yield return new AuditBreak(chain, entry.Index, entry.Id, entry.Index == expectedIndex ? "inserted" : "deleted",
+                    $"entry {entry.Index} of chain {chain} does not follow the entry before it: an entry was inserted or removed before it");
+            }
+
+            previousHash = entry.Hash;
+            expectedIndex = entry.Index + 1;
+        }
+    }
+
+    /// <summary>SHA-256 (lower-case hex) of the entry's canonical text.</summary>
+    public static string HashOf(AuditEntry e)
+    {
+        var text = string.Join('\u001f',
+            e.Chain,
+            e.Index.ToString(CultureInfo.InvariantCulture),
+            e.At.UtcDateTime.ToString("O", CultureInfo.InvariantCulture),
+            e.UserId ?? "",
+            e.UserName ?? "",
+            e.Action,
+            e.Target ?? "",
+            e.OldValue ?? "",
+            e.NewValue ?? "",
+            e.PreviousHash);
+        return Convert.ToHexStringLower(SHA256.HashData(Encoding.UTF8.GetBytes(text)));
+    }
+}

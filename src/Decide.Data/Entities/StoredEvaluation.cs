@@ -1,0 +1,71 @@
+namespace Decide.Data.Entities;
+
+/// <summary>
+/// One evaluation (one revision of it). The plan — scales, criteria with descriptors, groups, weighting method and
+/// options — is held as a <c>decide-evaluation/1</c> document without panel, bids or inputs (<see cref="PlanJson"/>);
+/// it is edited as a whole during setup and frozen, with its SHA-256, when the plan is locked.
+/// </summary>
+public sealed class StoredEvaluation
+{
+    public Guid Id { get; set; }
+
+    /// <summary>The buyer's reference ("KVTA-2026-017").</summary>
+    public string Reference { get; set; } = "";
+
+    public string Title { get; set; } = "";
+
+    public string? Organisation { get; set; }
+
+    public EvaluationStage Stage { get; set; }
+
+    /// <summary>1 for the first revision; a new revision copies the plan and links back.</summary>
+    public int Revision { get; set; } = 1;
+
+    public Guid? PreviousRevisionId { get; set; }
+
+    public string? RevisionReason { get; set; }
+
+    public Guid? SupersededById { get; set; }
+
+    /// <summary>The plan as a decide-evaluation/1 document (no panel, alternatives or inputs).</summary>
+    public string PlanJson { get; set; } = "{}";
+
+    /// <summary>SHA-256 (hex) of <see cref="PlanJson"/> when the plan was locked.</summary>
+    public string? PlanHash { get; set; }
+
+    /// <summary>Shortest rationale accepted with a rating, in characters.</summary>
+    public int MinRationaleLength { get; set; } = 20;
+
+    /// <summary>Whether quality assessors may see numeric (price) criteria.</summary>
+    public bool PricesVisibleToAssessors { get; set; }
+
+    /// <summary>How many approvers must approve before sign-off (1 or 2).</summary>
+    public int RequiredApprovals { get; set; } = 1;
+
+    public DateTimeOffset CreatedAt { get; set; }
+
+    public string CreatedBy { get; set; } = "";
+
+    public DateTimeOffset? PlanLockedAt { get; set; }
+
+    public DateTimeOffset? ScoringOpenedAt { get; set; }
+
+    public DateTimeOffset? ModerationStartedAt { get; set; }
+
+    public DateTimeOffset? SignedOffAt { get; set; }
+
+    /// <summary>A legal hold stops any retention-based disposal.</summary>
+    public bool LegalHold { get; set; }
+
+    public string? LegalHoldReason { get; set; }
+
+    /// <summary>Earliest date the record may be disposed of (at least three years after award is common practice).</summary>
+    public DateTimeOffset? RetainUntil { get; set; }
+
+    /// <summary>Optimistic-concurrency token, incremented on every change.</summary>
+    public long Version { get; set; }
+
+    public List<PanelMember> Panel { get; set; } = [];
+
+    public List<StoredAlternative> Alternatives { get; set; } = [];
+}

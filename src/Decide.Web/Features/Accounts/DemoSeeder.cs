@@ -1,0 +1,122 @@
+using System.Security.Cryptography;
+using System.Text;
+using Decide.Data;
+using Decide.Data.Entities;
+using Decide.Interchange;
+using Decide.Web.Features.Evaluations;
+using Decide.Web.Infrastructure;
+using Microsoft.AspNetCore.Identity;
+using Microsoft.EntityFrameworkCore;
+
+namespace Decide.Web.Features.Accounts;
+
+/// <summary>
+/// On an empty database: the administrator role, demo accounts for every role and the invented demo evaluation
+/// from <c>samples/</c>, at the moderation stage with every rating in. Prints the demo logins. Switch off with
+/// <c>Database:SeedDemo=false</c>.
+/// </summary>
+public sealed class DemoSeeder(
+    UserManager<DecideUser> users,
+    RoleManager<IdentityRole> roles,
+    IDbContextFactory<DecideDbContext> factory,
+    IWebHostEnvironment environment,
+    TimeProvider clock,
+    ILogger<DemoSeeder> logger)
+{
+    /// <summary>The demo password (every demo account). Demo data only; never use in production.</summary>
+    public const string DemoPassword = "Decide-demo-2026";
+
+    /// <summary>The demo file seeded.</summary>
+    public const string DemoFile = "bus-stop-displays-importance.json";
+
+    public const string Domain = "kestrel-vale.example";
+
+    public async Task SeedIfEmptyAsync(CancellationToken ct = default)
+    {
+        if (!await roles.RoleExistsAsync(IdentitySetup.AdministratorRole))
+        {
+            await roles.CreateAsync(new IdentityRole(IdentitySetup.AdministratorRole));
+        }
+
+        if (await users.Users.AnyAsync(ct))
+        {
+            return;
+        }
+
+        var path = Path.Combine(AppContext.BaseDirectory, "samples", DemoFile);
+        if (!File.Exists(path))
+        {
+            path = Path.Combine(environment.ContentRootPath, "..", "..", "samples", DemoFile);
+        }
+
+        var file = EvaluationFileReader.ReadFile(path);
+        var admin = await Account("admin@decide.example", "Site Administrator", administrator: true);
+        var facilitator = await Account($"facilitator@{Domain}", "Ione Castellane (Procurement Officer, facilitator)");
+        var observer = await Account($"probity@{Domain}", "Wendell Saxby (Probity Observer)");
+        var approver = await Account($"director@{Domain}", "Priya Marchetti (Director of Operations, approver)");
+        var accounts = new Dictionary<string, string>(StringComparer.Ordinal);
+        foreach (var assessor in file.Evaluation.Assessors)
+        {
+            accounts[assessor.Id] = (await Account($"{assessor.Id}@{Domain}", assessor.Name)).Id;
+        }
+
+        var now = clock.GetUtcNow();
+        await using var db = await factory.CreateDbContextAsync(ct);
+        var stored = EvaluationImporter.Add(db, file, accounts, facilitator.Id, admin.Id, now);
+        stored.Stage = EvaluationStage.Moderation;
+        stored.PlanLockedAt = now.AddDays(-20);
+        stored.ScoringOpenedAt = now.AddDays(-12);
+        stored.ModerationStartedAt = now.AddDays(-1);
+        stored.PlanHash = Convert.ToHexStringLower(SHA256.HashData(Encoding.UTF8.GetBytes(stored.PlanJson)));
+        stored.Panel.Add(new PanelMember { UserId = observer.Id, Role = PanelRole.Observer });
+        stored.Panel.Add(new PanelMember { UserId = approver.Id, Role = PanelRole.Approver });
+        var commercial = file.Evaluation.Assessors.LastOrDefault();
+        if (commercial is not null)
+        {
+            stored.Panel.Add(new PanelMember { UserId = accounts[commercial.Id], Role = PanelRole.PriceEvaluator, AssessorCode = commercial.Id });
+        }
+
+        foreach (var seat in stored.Panel.Where(p => p.Role is PanelRole.Assessor or PanelRole.PriceEvaluator))
+        {
+            seat.DeclarationSignedAt = now.AddDays(-19);
+            seat.DeclarationVersion = "2026-1";
+            seat.NamesConfirmedAt = now.AddDays(-12);
+            seat.WeightsSubmittedAt = now.AddDays(-19);
+            seat.SubmittedAt = now.AddDays(-2);
+        }
+
+        await AuditChain.AppendAsync(db, stored.Id.ToString(), new AuditEvent("evaluation.seeded", $"evaluations/{stored.Id}", null,
+            $"demo evaluation imported from samples/{DemoFile}"), admin.Id, admin.Email, now);
+        await db.SaveChangesAsync(ct);
+
+        logger.LogInformation(
+            "Seeded the demo evaluation {Reference}. Demo logins (password {Password}): administrator admin@decide.example; facilitator facilitator@{Domain}; assessors {Assessors}; price evaluator {Commercial}; observer probity@{Domain}; approver director@{Domain}.",
+            stored.Reference, DemoPassword, Domain, string.Join(", ", file.Evaluation.Assessors.Select(a => $"{a.Id}@{Domain}")), commercial is null ? "-" : $"{commercial.Id}@{Domain}", Domain, Domain);
+        Console.WriteLine();
+        Console.WriteLine($"Demo data seeded. Every demo account's password: {DemoPassword}");
+        Console.WriteLine($"  administrator    admin@decide.example");
+        Console.WriteLine($"  facilitator      facilitator@{Domain}");
+        Console.WriteLine($"  assessors        {string.Join(", ", file.Evaluation.Assessors.Select(a => $"{a.Id}@{Domain}"))}");
+        Console.WriteLine($"  price evaluator  {commercial?.Id}@{Domain}");
+        Console.WriteLine($"  observer         probity@{Domain}");
+        Console.WriteLine($"  approver         director@{Domain}");
+        Console.WriteLine();
+    }
+
+    private async Task<DecideUser> Account(string email, string name, bool administrator = false)
+    {
+        var user = new DecideUser { UserName = email, Email = email, EmailConfirmed = true, DisplayName = name, CreatedAt = clock.GetUtcNow() };
+        var result = await users.CreateAsync(user, DemoPassword);
+        if (!result.Succeeded)
+        {
+            throw new InvalidOperationException($"Could not create demo account {email}: {string.Join(" ", result.Errors.Select(e => e.Description))}");
+        }
+
+        if (administrator)
+        {
+            await users.AddToRoleAsync(user, IdentitySetup.AdministratorRole);
+        }
+
+        return user;
+    }
+}

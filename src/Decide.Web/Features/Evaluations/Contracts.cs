@@ -1,0 +1,65 @@
+using System.Text.Json;
+using Decide.Data.Entities;
+
+namespace Decide.Web.Features.Evaluations;
+
+/// <summary>Create an evaluation (administrator) and name its facilitator.</summary>
+public sealed record CreateEvaluationRequest(string Reference, string Title, string? Organisation, string FacilitatorEmail);
+
+/// <summary>A line of the evaluations list.</summary>
+public sealed record EvaluationSummary(
+    Guid Id, string Reference, string Title, string? Organisation, EvaluationStage Stage, int Revision,
+    IReadOnlyList<PanelRole> MyRoles, long Version);
+
+/// <summary>One evaluation as the caller may see it.</summary>
+public sealed record EvaluationDetail(
+    EvaluationSummary Summary,
+    EvaluationSettings Settings,
+    JsonElement? Plan,
+    string? PlanHash,
+    IReadOnlyList<PanelSeat> Panel,
+    IReadOnlyList<AlternativeView>? Alternatives,
+    StageDates Dates,
+    Guid? PreviousRevisionId,
+    string? RevisionReason,
+    Guid? SupersededById,
+    bool LegalHold);
+
+/// <summary>Plan settings that are not part of the portable file.</summary>
+public sealed record EvaluationSettings(int MinRationaleLength, bool PricesVisibleToAssessors, int RequiredApprovals);
+
+/// <summary>When each stage began.</summary>
+public sealed record StageDates(
+    DateTimeOffset CreatedAt, DateTimeOffset? PlanLockedAt, DateTimeOffset? ScoringOpenedAt,
+    DateTimeOffset? ModerationStartedAt, DateTimeOffset? SignedOffAt);
+
+/// <summary>A seat on the panel as shown to others.</summary>
+public sealed record PanelSeat(string UserId, string DisplayName, PanelRole Role, string? AssessorCode, double Weight,
+    IReadOnlyList<string>? Criteria, bool DeclarationSigned, bool Submitted);
+
+/// <summary>A bid.</summary>
+public sealed record AlternativeView(string Code, string Name);
+
+/// <summary>Replace the plan (setup only). <paramref name="Plan"/> is a decide-evaluation/1 document without panel, bids or inputs.</summary>
+public sealed record UpdatePlanRequest(JsonElement Plan, EvaluationSettings? Settings, long Version);
+
+/// <summary>Replace the panel's assessors, price evaluators, observers and approvers (setup only). Facilitators stay.</summary>
+public sealed record UpdatePanelRequest(IReadOnlyList<SeatRequest> Seats, long Version);
+
+/// <summary>One seat: the account by e-mail, the role, and for assessors their code, weight and assigned criteria.</summary>
+public sealed record SeatRequest(string Email, PanelRole Role, string? AssessorCode, double? Weight, IReadOnlyList<string>? Criteria);
+
+/// <summary>Replace the list of bids (setup or plan locked).</summary>
+public sealed record UpdateAlternativesRequest(IReadOnlyList<AlternativeView> Alternatives, long Version);
+
+/// <summary>A stage change; <paramref name="Version"/> guards against acting on a stale view.</summary>
+public sealed record TransitionRequest(long Version);
+
+/// <summary>Open a new revision with the reason it is needed.</summary>
+public sealed record RevisionRequest(string Reason);
+
+/// <summary>Set or lift a legal hold (administrator).</summary>
+public sealed record LegalHoldRequest(bool Hold, string Reason);
+
+/// <summary>The outcome of a stage change, with anything the facilitator should know.</summary>
+public sealed record TransitionResult(EvaluationSummary Evaluation, IReadOnlyList<string> Warnings);

@@ -1,0 +1,57 @@
+using Decide.Data;
+using Decide.Data.Entities;
+using Decide.Web.Infrastructure;
+using Microsoft.EntityFrameworkCore;
+
+namespace Decide.Web.Features.Evaluations;
+
+/// <summary>An evaluation as seen by the current user: their roles in it.</summary>
+public sealed record Membership(StoredEvaluation Evaluation, IReadOnlySet<PanelRole> Roles, bool IsAdministrator, PanelMember? Seat)
+{
+    public bool Has(PanelRole role) => Roles.Contains(role);
+
+    /// <summary>True for roles that may read the whole file (facilitator, observer, approver).</summary>
+    public bool ReadsEverything => Has(PanelRole.Facilitator) || Has(PanelRole.Observer) || Has(PanelRole.Approver);
+
+    /// <summary>Refuses unless the user holds one of <paramref name="roles"/>.</summary>
+    public void Require(params PanelRole[] roles)
+    {
+        if (!roles.Any(Roles.Contains))
+        {
+            throw DomainProblem.Forbidden($"This needs the role {string.Join(" or ", roles.Select(r => r.ToString().ToLowerInvariant()))} in evaluation {Evaluation.Reference}.");
+        }
+    }
+
+    /// <summary>Refuses unless the evaluation is at one of <paramref name="stages"/>.</summary>
+    public void RequireStage(string action, params EvaluationStage[] stages)
+    {
+        if (!stages.Contains(Evaluation.Stage))
+        {
+            throw DomainProblem.Stage(
+                $"Cannot {action}: evaluation {Evaluation.Reference} is at stage {Evaluation.Stage}; this is possible only at {string.Join(" or ", stages)}.");
+        }
+    }
+}
+
+/// <summary>Loads an evaluation with the current user's roles, hiding it from anyone who has none.</summary>
+public sealed class EvaluationAccess(CurrentUser user)
+{
+    /// <summary>
+    /// The evaluation and the user's roles. Administrators see every evaluation (to manage it) but hold no panel
+    /// role unless given one. A user with no role gets 404, so that evaluations do not leak by id.
+    /// </summary>
+    public async Task<Membership> LoadAsync(DecideDbContext db, Guid id, CancellationToken ct = default)
+    {
+        var userId = user.Id;
+        var evaluation = await db.Evaluations.Include(e => e.Panel).FirstOrDefaultAsync(e => e.Id == id, ct)
+            ?? throw DomainProblem.NotFound($"Evaluation {id}");
+        var seats = evaluation.Panel.Where(p => p.UserId == userId).ToArray();
+        if (seats.Length == 0 && !user.IsAdministrator)
+        {
+            throw DomainProblem.NotFound($"Evaluation {id}");
+        }
+
+        return new Membership(evaluation, seats.Select(s => s.Role).ToHashSet(), user.IsAdministrator,
+            seats.FirstOrDefault(s => s.Role == PanelRole.Assessor) ?? seats.FirstOrDefault(s => s.Role == PanelRole.PriceEvaluator));
+    }
+}

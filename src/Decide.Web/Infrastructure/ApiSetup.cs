@@ -1,0 +1,66 @@
+using System.Text.Json.Serialization;
+using Decide.Web.Api;
+using Decide.Web.Features.Accounts;
+using Decide.Web.Features.Audit;
+using Decide.Web.Features.Evaluations;
+using Microsoft.AspNetCore.Http.Json;
+
+namespace Decide.Web.Infrastructure;
+
+/// <summary>HTTP plumbing shared by every endpoint: problem details, JSON, OpenAPI, limits, the pipeline.</summary>
+public static class ApiSetup
+{
+    /// <summary>Largest request body accepted (an evaluation file with every rationale fits comfortably).</summary>
+    public const long MaxRequestBytes = 10 * 1024 * 1024;
+
+    public static WebApplicationBuilder AddDecideApi(this WebApplicationBuilder builder)
+    {
+        builder.Services.AddProblemDetails();
+        builder.Services.AddExceptionHandler<ProblemHandler>();
+        builder.Services.AddOpenApi("v1");
+        builder.Services.AddHttpContextAccessor();
+        builder.Services.Configure<JsonOptions>(o =>
+        {
+            o.SerializerOptions.Converters.Add(new JsonStringEnumConverter(System.Text.Json.JsonNamingPolicy.CamelCase));
+            o.SerializerOptions.MaxDepth = 32;
+        });
+        builder.WebHost.ConfigureKestrel(k => k.Limits.MaxRequestBodySize = MaxRequestBytes);
+
+        // Malformed bodies reach the problem handler, which says what is wrong instead of a bare 400.
+        builder.Services.Configure<RouteHandlerOptions>(o => o.ThrowOnBadRequest = true);
+        return builder;
+    }
+
+    public static IServiceCollection AddDecideFeatures(this IServiceCollection services)
+    {
+        services.AddScoped<CurrentUser>();
+        services.AddScoped<AuditWriter>();
+        services.AddScoped<EvaluationAccess>();
+        services.AddScoped<EvaluationService>();
+        services.AddScoped<AuditService>();
+        services.AddScoped<EvaluationComposer>();
+        services.AddScoped<AccountService>();
+        services.AddScoped<DemoSeeder>();
+        return services;
+    }
+
+    public static WebApplication UseDecidePipeline(this WebApplication app)
+    {
+        app.UseExceptionHandler();
+        app.UseStatusCodePages();
+        app.UseAuthentication();
+        app.UseAuthorization();
+        return app;
+    }
+
+    public static WebApplication MapDecideApi(this WebApplication app)
+    {
+        app.MapOpenApi("/openapi/{documentName}.json");
+        app.MapGet("/health/live", () => TypedResults.Ok(new { status = "live" })).ExcludeFromDescription();
+        var api = app.MapGroup("/api");
+        api.MapAccountEndpoints();
+        api.MapEvaluationEndpoints();
+        api.MapAuditEndpoints();
+        return app;
+    }
+}

@@ -1,0 +1,64 @@
+using Decide.Data;
+using Decide.Web.Features.Accounts;
+using Microsoft.EntityFrameworkCore;
+
+namespace Decide.Web.Infrastructure;
+
+/// <summary>Database settings (section <c>Database</c>).</summary>
+public sealed class DatabaseOptions
+{
+    public const string Section = "Database";
+
+    /// <summary><c>Sqlite</c> (default).</summary>
+    public string Provider { get; set; } = "Sqlite";
+
+    /// <summary>Folder for the SQLite file when no connection string is given; relative to the content root.</summary>
+    public string DataFolder { get; set; } = "data";
+
+    /// <summary>Seed the demo evaluation and demo accounts into an empty database.</summary>
+    public bool SeedDemo { get; set; } = true;
+}
+
+/// <summary>Registers the database and prepares it at start (migrations, then the demo seed).</summary>
+public static class StorageSetup
+{
+    public static WebApplicationBuilder AddDecideStorage(this WebApplicationBuilder builder)
+    {
+        var options = builder.Configuration.GetSection(DatabaseOptions.Section).Get<DatabaseOptions>() ?? new DatabaseOptions();
+        builder.Services.AddSingleton(options);
+        builder.Services.AddSingleton(TimeProvider.System);
+
+        var connectionString = builder.Configuration.GetConnectionString("Decide");
+        if (!string.Equals(options.Provider, "Sqlite", StringComparison.OrdinalIgnoreCase))
+        {
+            throw new InvalidOperationException($"Database:Provider '{options.Provider}' is not supported; use Sqlite.");
+        }
+
+        if (string.IsNullOrWhiteSpace(connectionString))
+        {
+            var folder = Path.GetFullPath(options.DataFolder, builder.Environment.ContentRootPath);
+            Directory.CreateDirectory(folder);
+            connectionString = $"Data Source={Path.Combine(folder, "decide.db")}";
+        }
+
+        builder.Services.AddDbContextFactory<DecideDbContext>(db => db.UseSqlite(
+            connectionString, sqlite => sqlite.MigrationsAssembly("Decide.Data.Sqlite")));
+        return builder;
+    }
+
+    /// <summary>Applies pending migrations and, on an empty database, seeds the demo.</summary>
+    public static async Task PrepareDatabaseAsync(this WebApplication app)
+    {
+        var factory = app.Services.GetRequiredService<IDbContextFactory<DecideDbContext>>();
+        await using (var db = await factory.CreateDbContextAsync())
+        {
+            await db.Database.MigrateAsync();
+        }
+
+        if (app.Services.GetRequiredService<DatabaseOptions>().SeedDemo)
+        {
+            using var scope = app.Services.CreateScope();
+            await scope.ServiceProvider.GetRequiredService<DemoSeeder>().SeedIfEmptyAsync();
+        }
+    }
+}

@@ -1,0 +1,36 @@
+using Decide.Data;
+using Microsoft.Data.Sqlite;
+using Microsoft.EntityFrameworkCore;
+
+namespace Decide.Web.Infrastructure;
+
+/// <summary>
+/// Runs one use case in a fresh, short-lived context and saves once. If another request took the same audit
+/// position first (the chain's unique index), the whole use case runs again on fresh data; concurrency conflicts
+/// on the item itself are the caller's to report (409).
+/// </summary>
+public static class UnitOfWork
+{
+    private const int Attempts = 8;
+
+    public static async Task<T> RunAsync<T>(IDbContextFactory<DecideDbContext> factory, Func<DecideDbContext, Task<T>> work, CancellationToken ct = default)
+    {
+        for (var attempt = 1; ; attempt++)
+        {
+            await using var db = await factory.CreateDbContextAsync(ct);
+            try
+            {
+                return await work(db);
+            }
+            catch (DbUpdateException e) when (attempt < Attempts && IsAuditCollision(e))
+            {
+                await Task.Delay(Random.Shared.Next(5, 20 * attempt), ct);
+            }
+        }
+    }
+
+    private static bool IsAuditCollision(DbUpdateException e) =>
+        e is not DbUpdateConcurrencyException
+        && (e.InnerException?.Message.Contains("audit_entries", StringComparison.OrdinalIgnoreCase) == true
+            || (e.InnerException is SqliteException { SqliteErrorCode: 19 } s && s.Message.Contains("audit_entries", StringComparison.OrdinalIgnoreCase)));
+}

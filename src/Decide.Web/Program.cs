@@ -1,0 +1,20 @@
+using Decide.Web.Api;
+using Decide.Web.Infrastructure;
+
+var builder = WebApplication.CreateBuilder(args);
+
+builder.AddDecideStorage();
+builder.AddDecideIdentity();
+builder.AddDecideApi();
+builder.Services.AddDecideFeatures();
+
+var app = builder.Build();
+
+await app.PrepareDatabaseAsync();
+app.UseDecidePipeline();
+app.MapDecideApi();
+
+app.Run();
+
+/// <summary>Entry point; public so that integration tests can host the app.</summary>
+public partial class Program;
