@@ -3,6 +3,7 @@ using Decide.Web.Api;
 using Decide.Web.Features.Accounts;
 using Decide.Web.Features.Audit;
 using Decide.Web.Features.Evaluations;
+using Decide.Web.Features.Inputs;
 using Microsoft.AspNetCore.Http.Json;
 
 namespace Decide.Web.Infrastructure;
@@ -41,6 +42,12 @@ public static class ApiSetup
         services.AddScoped<EvaluationComposer>();
         services.AddScoped<AccountService>();
         services.AddScoped<DemoSeeder>();
+        services.AddScoped<InputAccess>();
+        services.AddScoped<DeclarationService>();
+        services.AddScoped<WeightsService>();
+        services.AddScoped<RatingSheetService>();
+        services.AddScoped<NumericValueService>();
+        services.AddScoped<GateService>();
         return services;
     }
 
@@ -61,6 +68,7 @@ public static class ApiSetup
         api.MapAccountEndpoints();
         api.MapEvaluationEndpoints();
         api.MapAuditEndpoints();
+        api.MapInputEndpoints();
         return app;
     }
 }
