@@ -266,6 +266,15 @@ public sealed class EvaluationService(
             var existing = await db.Alternatives.Where(a => a.EvaluationId == id).ToListAsync(ct);
             var before = string.Join("; ", existing.OrderBy(a => a.Position).Select(a => $"{a.Code}={a.Name}"));
             db.Alternatives.RemoveRange(existing);
+
+            // A bid taken off the list takes its gate results and values with it (recorded in the audit entry).
+            var kept = request.Alternatives.Select(a => a.Code.Trim()).ToHashSet(StringComparer.Ordinal);
+            var orphanGates = await db.GateResults.Where(g => g.EvaluationId == id).ToListAsync(ct);
+            var orphanValues = await db.NumericValues.Where(v => v.EvaluationId == id).ToListAsync(ct);
+            db.GateResults.RemoveRange(orphanGates.Where(g => !kept.Contains(g.AlternativeCode)));
+            db.NumericValues.RemoveRange(orphanValues.Where(v => !kept.Contains(v.AlternativeCode)));
+            before += string.Concat(orphanGates.Where(g => !kept.Contains(g.AlternativeCode))
+                .Select(g => $"; gate {g.AlternativeCode}/{g.CriterionId}={(g.Passed ? "pass" : "fail")}"));
             var now = clock.GetUtcNow();
             db.Alternatives.AddRange(request.Alternatives.Select((a, i) => new StoredAlternative
             {
@@ -289,6 +298,16 @@ public sealed class EvaluationService(
             if (file.Evaluation.Assessors.Count == 0)
             {
                 throw DomainProblem.Stage("Cannot lock the plan: the panel has no assessor yet.");
+            }
+
+            // Only submitted weights are frozen: an assessor still working on theirs must finish or withdraw them.
+            var judges = file.Evaluation.Importance.Select(r => r.Assessor).Concat(file.Evaluation.Pairwise.Select(p => p.Assessor)).ToHashSet(StringComparer.Ordinal);
+            var unsubmitted = m.Evaluation.Panel
+                .Where(p => p.Role == PanelRole.Assessor && p.AssessorCode is { } code && judges.Contains(code) && p.WeightsSubmittedAt is null)
+                .Select(p => p.AssessorCode!).ToArray();
+            if (unsubmitted.Length > 0)
+            {
+                throw DomainProblem.Stage($"Cannot lock the plan: {string.Join(", ", unsubmitted)} {(unsubmitted.Length == 1 ? "has" : "have")} weight judgements that are not submitted yet.");
             }
 
             // Bids are not in yet: judge the plan and the weights alone.
