@@ -3,6 +3,7 @@ using Decide.Web.Api;
 using Decide.Web.Features.Accounts;
 using Decide.Web.Features.Audit;
 using Decide.Web.Features.Evaluations;
+using Decide.Web.Features.Moderation;
 using Microsoft.AspNetCore.Http.Json;
 
 namespace Decide.Web.Infrastructure;
@@ -41,6 +42,8 @@ public static class ApiSetup
         services.AddScoped<EvaluationComposer>();
         services.AddScoped<AccountService>();
         services.AddScoped<DemoSeeder>();
+        services.AddScoped<ScoringBoardService>();
+        services.AddScoped<ModerationService>();
         return services;
     }
 
@@ -61,6 +64,7 @@ public static class ApiSetup
         api.MapAccountEndpoints();
         api.MapEvaluationEndpoints();
         api.MapAuditEndpoints();
+        api.MapModerationEndpoints();
         return app;
     }
 }
