@@ -3,7 +3,9 @@ using Decide.Web.Api;
 using Decide.Web.Features.Accounts;
 using Decide.Web.Features.Audit;
 using Decide.Web.Features.Evaluations;
+using Decide.Web.Features.Exchange;
 using Decide.Web.Features.Moderation;
+using Decide.Web.Features.Results;
 using Microsoft.AspNetCore.Http.Json;
 
 namespace Decide.Web.Infrastructure;
@@ -44,6 +46,9 @@ public static class ApiSetup
         services.AddScoped<DemoSeeder>();
         services.AddScoped<ScoringBoardService>();
         services.AddScoped<ModerationService>();
+        services.AddScoped<ResultsService>();
+        services.AddScoped<AnalysisService>();
+        services.AddScoped<ExchangeService>();
         return services;
     }
 
@@ -65,6 +70,9 @@ public static class ApiSetup
         api.MapEvaluationEndpoints();
         api.MapAuditEndpoints();
         api.MapModerationEndpoints();
+        api.MapResultsEndpoints();
+        api.MapExchangeEndpoints();
+        api.MapAnalysisEndpoints();
         return app;
     }
 }
