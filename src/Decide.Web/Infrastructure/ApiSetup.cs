@@ -6,6 +6,7 @@ using Decide.Web.Features.Evaluations;
 using Decide.Web.Features.Exchange;
 using Decide.Web.Features.Moderation;
 using Decide.Web.Features.Results;
+using Decide.Web.Features.SignOff;
 using Microsoft.AspNetCore.Http.Json;
 
 namespace Decide.Web.Infrastructure;
@@ -49,6 +50,7 @@ public static class ApiSetup
         services.AddScoped<ResultsService>();
         services.AddScoped<AnalysisService>();
         services.AddScoped<ExchangeService>();
+        services.AddScoped<SignOffService>();
         return services;
     }
 
@@ -73,6 +75,7 @@ public static class ApiSetup
         api.MapResultsEndpoints();
         api.MapExchangeEndpoints();
         api.MapAnalysisEndpoints();
+        api.MapSignOffEndpoints();
         return app;
     }
 }
