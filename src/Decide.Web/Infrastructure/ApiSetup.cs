@@ -4,6 +4,10 @@ using Decide.Web.Features.Accounts;
 using Decide.Web.Features.Audit;
 using Decide.Web.Features.Evaluations;
 using Decide.Web.Features.Inputs;
+using Decide.Web.Features.Exchange;
+using Decide.Web.Features.Moderation;
+using Decide.Web.Features.Results;
+using Decide.Web.Features.SignOff;
 using Microsoft.AspNetCore.Http.Json;
 
 namespace Decide.Web.Infrastructure;
@@ -48,6 +52,12 @@ public static class ApiSetup
         services.AddScoped<RatingSheetService>();
         services.AddScoped<NumericValueService>();
         services.AddScoped<GateService>();
+        services.AddScoped<ScoringBoardService>();
+        services.AddScoped<ModerationService>();
+        services.AddScoped<ResultsService>();
+        services.AddScoped<AnalysisService>();
+        services.AddScoped<ExchangeService>();
+        services.AddScoped<SignOffService>();
         return services;
     }
 
@@ -69,6 +79,11 @@ public static class ApiSetup
         api.MapEvaluationEndpoints();
         api.MapAuditEndpoints();
         api.MapInputEndpoints();
+        api.MapModerationEndpoints();
+        api.MapResultsEndpoints();
+        api.MapExchangeEndpoints();
+        api.MapAnalysisEndpoints();
+        api.MapSignOffEndpoints();
         return app;
     }
 }

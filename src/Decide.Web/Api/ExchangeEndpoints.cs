@@ -1,0 +1,41 @@
+using Decide.Web.Features.Evaluations;
+using Decide.Web.Features.Exchange;
+using Microsoft.AspNetCore.Http.HttpResults;
+
+namespace Decide.Web.Api;
+
+/// <summary>Export and import of the portable evaluation file; spreadsheet extracts.</summary>
+public static class ExchangeEndpoints
+{
+    public static RouteGroupBuilder MapExchangeEndpoints(this RouteGroupBuilder api)
+    {
+        var group = api.MapGroup("/evaluations").WithTags("Exchange").RequireAuthorization();
+        group.MapGet("/{id:guid}/export", Export)
+            .WithSummary("The whole evaluation as a decide-evaluation/1 file to download (facilitator, observer, approver).");
+        group.MapGet("/{id:guid}/export/ratings.csv", RatingsCsv)
+            .WithSummary("Every rating with rationale, declined reason and moderated value, as spreadsheet-safe CSV (facilitator, observer, approver).");
+        group.MapGet("/{id:guid}/export/results.csv", ResultsCsv)
+            .WithSummary("The ranking (rank, bidder, closeness, d+, d−) as spreadsheet-safe CSV (panel, from moderation on).");
+        group.MapPost("/import", Import)
+            .WithSummary("Store a decide-evaluation/1 file as a new evaluation at stage Setup, naming the facilitator and each assessor's account (administrator).");
+        return api;
+    }
+
+    private static async Task<FileContentHttpResult> Export(Guid id, ExchangeService service, CancellationToken ct) =>
+        Download(await service.ExportAsync(id, ct));
+
+    private static async Task<FileContentHttpResult> RatingsCsv(Guid id, ExchangeService service, CancellationToken ct) =>
+        Download(await service.RatingsCsvAsync(id, ct));
+
+    private static async Task<FileContentHttpResult> ResultsCsv(Guid id, ExchangeService service, CancellationToken ct) =>
+        Download(await service.ResultsCsvAsync(id, ct));
+
+    private static async Task<Created<EvaluationSummary>> Import(ImportRequest request, ExchangeService service, CancellationToken ct)
+    {
+        var created = await service.ImportAsync(request, ct);
+        return TypedResults.Created($"/api/evaluations/{created.Id}", created);
+    }
+
+    private static FileContentHttpResult Download(DownloadFile file) =>
+        TypedResults.File(file.Content, file.ContentType, file.FileName);
+}

@@ -1,0 +1,202 @@
+using System.Security.Cryptography;
+using System.Text;
+using System.Text.Json;
+using System.Text.RegularExpressions;
+using Decide.Core;
+using Decide.Core.Analysis;
+using Decide.Data;
+using Decide.Data.Entities;
+using Decide.Interchange;
+using Decide.Web.Features.Audit;
+using Decide.Web.Features.Evaluations;
+using Decide.Web.Features.Results;
+using Decide.Web.Infrastructure;
+using Microsoft.EntityFrameworkCore;
+
+namespace Decide.Web.Features.Exchange;
+
+/// <summary>
+/// The evaluation in and out: the portable file (<c>decide-evaluation/1</c>) for export and import, and spreadsheet
+/// extracts of the ratings and the results. Every export is audited with the SHA-256 of what left the service.
+/// </summary>
+public sealed partial class ExchangeService(
+    IDbContextFactory<DecideDbContext> factory,
+    EvaluationAccess access,
+    EvaluationComposer composer,
+    CurrentUser user,
+    AuditWriter audit,
+    TimeProvider clock)
+{
+    private const string CsvType = "text/csv; charset=utf-8";
+
+    /// <summary>The whole evaluation as a portable file (facilitator, observer, approver; any stage).</summary>
+    public Task<DownloadFile> ExportAsync(Guid id, CancellationToken ct = default) =>
+        UnitOfWork.RunAsync(factory, async db =>
+        {
+            var m = await access.LoadAsync(db, id, ct);
+            m.Require(PanelRole.Facilitator, PanelRole.Observer, PanelRole.Approver);
+            var bytes = Encoding.UTF8.GetBytes(EvaluationFileWriter.ToJson(await composer.ComposeAsync(db, m.Evaluation, ct)));
+            return await Download(db, m.Evaluation, "evaluation.exported", "export", FileName(m.Evaluation, ".decide.json"), "application/json", bytes, ct);
+        }, ct);
+
+    /// <summary>Every rating with its rationale, declined reason and the moderated value in force (facilitator, observer, approver).</summary>
+    public Task<DownloadFile> RatingsCsvAsync(Guid id, CancellationToken ct = default) =>
+        UnitOfWork.RunAsync(factory, async db =>
+        {
+            var m = await access.LoadAsync(db, id, ct);
+            m.Require(PanelRole.Facilitator, PanelRole.Observer, PanelRole.Approver);
+            var e = (await composer.ComposeAsync(db, m.Evaluation, ct)).Evaluation;
+            var moderated = e.Moderated.ToDictionary(x => (x.Alternative, x.Criterion), x => x.Term);
+            var csv = new SpreadsheetCsv().Header("assessor", "bidder", "criterion", "term", "rationale", "declined_reason", "moderated_term");
+            foreach (var r in e.Ratings)
+            {
+                csv.Row(SpreadsheetCsv.Text(r.Assessor), SpreadsheetCsv.Text(r.Alternative), SpreadsheetCsv.Text(r.Criterion),
+                    SpreadsheetCsv.Text(r.Term), SpreadsheetCsv.Text(r.Rationale), SpreadsheetCsv.Text(r.Declined),
+                    SpreadsheetCsv.Text(moderated.GetValueOrDefault((r.Alternative, r.Criterion))));
+            }
+
+            return await Download(db, m.Evaluation, "ratings.exported", "export/ratings.csv", FileName(m.Evaluation, "-ratings.csv"), CsvType, csv.ToUtf8(), ct);
+        }, ct);
+
+    /// <summary>
+    /// The ranking (rank, bidder, closeness, d+, d−), then the bidders excluded by a gate; with the results' roles and
+    /// stages (from moderation on).
+    /// </summary>
+    public Task<DownloadFile> ResultsCsvAsync(Guid id, CancellationToken ct = default) =>
+        UnitOfWork.RunAsync(factory, async db =>
+        {
+            var m = await access.LoadAsync(db, id, ct);
+            ResultsService.RequireResultsVisible(m, "export the results");
+            var e = (await composer.ComposeAsync(db, m.Evaluation, ct)).Evaluation;
+            var result = DecisionEngine.Analyze(e);
+            var names = e.Alternatives.ToDictionary(a => a.Id, a => a.Name, StringComparer.Ordinal);
+            var csv = new SpreadsheetCsv().Header("rank", "bidder", "name", "closeness", "d_plus", "d_minus", "failed_gates");
+            foreach (var r in result.Ranking)
+            {
+                csv.Row(SpreadsheetCsv.Number(r.Rank), SpreadsheetCsv.Text(r.Alternative), SpreadsheetCsv.Text(names.GetValueOrDefault(r.Alternative)),
+                    SpreadsheetCsv.Number(r.Closeness), SpreadsheetCsv.Number(r.DPlus), SpreadsheetCsv.Number(r.DMinus), "");
+            }
+
+            foreach (var x in result.Excluded)
+            {
+                csv.Row("", SpreadsheetCsv.Text(x.Alternative), SpreadsheetCsv.Text(names.GetValueOrDefault(x.Alternative)), "", "", "",
+                    SpreadsheetCsv.Text(string.Join(" ", x.Gates)));
+            }
+
+            return await Download(db, m.Evaluation, "results.exported", "export/results.csv", FileName(m.Evaluation, "-results.csv"), CsvType, csv.ToUtf8(), ct);
+        }, ct);
+
+    /// <summary>
+    /// Stores a portable file as a new evaluation at stage Setup (administrator), with every input of the file.
+    /// Refused, naming each problem, when the file is not valid, the facilitator or an assessor's account is
+    /// unknown, or the accounts do not match the file's assessor codes.
+    /// </summary>
+    public async Task<EvaluationSummary> ImportAsync(ImportRequest request, CancellationToken ct = default)
+    {
+        if (!user.IsAdministrator)
+        {
+            throw DomainProblem.Forbidden("Only an administrator imports evaluations.");
+        }
+
+        if (request.File.ValueKind != JsonValueKind.Object)
+        {
+            throw DomainProblem.Invalid("file", "give the decide-evaluation/1 file as a JSON object");
+        }
+
+        var raw = request.File.GetRawText();
+        EvaluationFile file;
+        try
+        {
+            file = EvaluationFileReader.Read(raw);
+        }
+        catch (InvalidEvaluationException e)
+        {
+            throw new InvalidEvaluationException(e.Errors.Select(x => x with { Path = "file" + x.Path[1..] }).ToArray());
+        }
+
+        var errors = new Dictionary<string, string[]>();
+        if ((file.Metadata.Reference?.Length ?? 0) > 100)
+        {
+            errors["file.reference"] = ["the reference is longer than 100 characters"];
+        }
+
+        if (file.Evaluation.Title.Length > 300)
+        {
+            errors["file.title"] = ["the title is longer than 300 characters"];
+        }
+
+        return await UnitOfWork.RunAsync(factory, async db =>
+        {
+            var facilitator = string.IsNullOrWhiteSpace(request.FacilitatorEmail)
+                ? null
+                : await db.Users.AsNoTracking().FirstOrDefaultAsync(u => u.NormalizedEmail == request.FacilitatorEmail.Trim().ToUpperInvariant(), ct);
+            if (facilitator is null)
+            {
+                errors["facilitatorEmail"] = [string.IsNullOrWhiteSpace(request.FacilitatorEmail)
+                    ? "name the facilitator by the e-mail address of their account"
+                    : $"no account has the e-mail address {request.FacilitatorEmail}"];
+            }
+
+            var given = request.Accounts ?? new Dictionary<string, string>();
+            var codes = file.Evaluation.Assessors.Select(a => a.Id).ToHashSet(StringComparer.Ordinal);
+            var emails = given.Values.Where(v => !string.IsNullOrWhiteSpace(v)).Select(v => v.Trim().ToUpperInvariant()).Distinct().ToArray();
+            var found = await db.Users.AsNoTracking().Where(u => emails.Contains(u.NormalizedEmail!)).ToDictionaryAsync(u => u.NormalizedEmail!, ct);
+            var accounts = new Dictionary<string, string>(StringComparer.Ordinal);
+            foreach (var code in codes.Where(c => !given.ContainsKey(c)))
+            {
+                errors[$"accounts.{code}"] = [$"the file's assessor \"{code}\" needs an account: give the e-mail address of the person who holds the seat"];
+            }
+
+            foreach (var (code, email) in given)
+            {
+                if (!codes.Contains(code))
+                {
+                    errors[$"accounts.{code}"] = [$"the file has no assessor \"{code}\" (it has {string.Join(", ", codes)})"];
+                }
+                else if (string.IsNullOrWhiteSpace(email) || !found.TryGetValue(email.Trim().ToUpperInvariant(), out var account))
+                {
+                    errors[$"accounts.{code}"] = [$"no account has the e-mail address {email}"];
+                }
+                else if (account.Id == facilitator?.Id)
+                {
+                    errors[$"accounts.{code}"] = ["the facilitator runs the evaluation and never scores; give another account"];
+                }
+                else
+                {
+                    accounts[code] = account.Id;
+                }
+            }
+
+            if (errors.Count > 0)
+            {
+                throw DomainProblem.Invalid(errors);
+            }
+
+            var stored = EvaluationImporter.Add(db, file, accounts, facilitator!.Id, user.Id, clock.GetUtcNow());
+            await audit.RecordAsync(db, stored.Id, new AuditEvent("evaluation.imported", $"evaluations/{stored.Id}", null,
+                $"{stored.Reference} · {stored.Title}; facilitator {facilitator.Email}; assessors {string.Join(", ", given.Select(x => $"{x.Key}={x.Value.Trim()}"))}; file sha256 {Sha256(Encoding.UTF8.GetBytes(raw))}"), ct);
+            await db.SaveChangesAsync(ct);
+            return EvaluationService.Summarise(stored, [.. stored.Panel.Where(p => p.UserId == user.Id).Select(p => p.Role)]);
+        }, ct);
+    }
+
+    private async Task<DownloadFile> Download(
+        DecideDbContext db, StoredEvaluation e, string action, string target, string fileName, string contentType, byte[] content, CancellationToken ct)
+    {
+        await audit.RecordAsync(db, e.Id, new AuditEvent(action, $"evaluations/{e.Id}/{target}", null, $"{fileName}; sha256 {Sha256(content)}"), ct);
+        await db.SaveChangesAsync(ct);
+        return new DownloadFile(fileName, contentType, content);
+    }
+
+    /// <summary>The reference made safe for a file name, with the revision ("KVTA-2026-017-r1.decide.json").</summary>
+    private static string FileName(StoredEvaluation e, string suffix)
+    {
+        var reference = UnsafeFileNameCharacters().Replace(e.Reference, "-").Trim('-', '.');
+        return $"{(reference.Length == 0 ? "evaluation" : reference)}-r{e.Revision}{suffix}";
+    }
+
+    private static string Sha256(byte[] content) => Convert.ToHexStringLower(SHA256.HashData(content));
+
+    [GeneratedRegex("[^A-Za-z0-9._-]+")]
+    private static partial Regex UnsafeFileNameCharacters();
+}

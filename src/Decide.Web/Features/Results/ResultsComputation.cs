@@ -1,0 +1,25 @@
+using System.Security.Cryptography;
+using System.Text;
+using Decide.Core.Analysis;
+using Decide.Core.Robustness;
+using Decide.Interchange;
+
+namespace Decide.Web.Features.Results;
+
+/// <summary>A results document and the SHA-256 of its text (recorded in the audit trail).</summary>
+public sealed record ResultsJson(string Json, string Sha256);
+
+/// <summary>Runs the engine on a portable evaluation: the analysis, then robustness, as one results document.</summary>
+public static class ResultsComputation
+{
+    /// <summary>The full results document (<c>decide-results/1</c>) with sensitivity, agreement and summary.</summary>
+    /// <exception cref="Decide.Core.InvalidEvaluationException">The evaluation cannot be analysed; every problem by JSON path.</exception>
+    public static ResultsJson Run(EvaluationFile file, RobustnessOptions options)
+    {
+        var prepared = DecisionEngine.Prepare(file.Evaluation);
+        var result = prepared.Analyze();
+        var robustness = RobustnessAnalysis.Run(prepared, result, options);
+        var json = ResultsWriter.ToJson(result, file.Evaluation, robustness);
+        return new ResultsJson(json, Convert.ToHexStringLower(SHA256.HashData(Encoding.UTF8.GetBytes(json))));
+    }
+}
