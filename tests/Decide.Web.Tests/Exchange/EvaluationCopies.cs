@@ -84,30 +84,62 @@ public static class EvaluationCopies
         await OkAsync(await client.PutAsJsonAsync($"/api/evaluations/{id}/panel", new { seats, version = Version(detail) }));
     }
 
-    /// <summary>Locks the plan and opens scoring.</summary>
+    /// <summary>Each assessor signs the declaration and submits the weights imported with the copy; then the plan is locked and scoring opened.</summary>
     public static async Task OpenScoringAsync(DecideWebFactory factory, Guid id)
     {
+        foreach (var code in await AssessorCodesAsync(factory, id))
+        {
+            using var assessor = await factory.SignInAsync($"{code}@{DemoSeeder.Domain}");
+            var declaration = await assessor.GetFromJsonAsync<JsonElement>("/api/declaration");
+            await OkAsync(await assessor.PostAsJsonAsync($"/api/evaluations/{id}/declaration",
+                new { version = declaration.GetProperty("version").GetString(), accepted = true }));
+            await OkAsync(await assessor.PostAsJsonAsync($"/api/evaluations/{id}/my/weights/submit", new { }));
+        }
+
         using var client = await factory.SignInAsync(CopyFacilitator);
         await TransitionAsync(client, id, "lock-plan");
         await TransitionAsync(client, id, "open-scoring");
     }
 
-    /// <summary>
-    /// Marks every assessor's sheet submitted. The imported ratings are complete; submitting a sheet belongs to the
-    /// assessors' input endpoints, which these tests do not exercise, so the seats are marked in the database.
-    /// </summary>
+    /// <summary>Each assessor confirms the declaration with the bidders' names and submits the sheet imported with the copy.</summary>
     public static async Task SubmitAllSheetsAsync(DecideWebFactory factory, Guid id)
     {
-        var contexts = factory.Services.GetRequiredService<IDbContextFactory<DecideDbContext>>();
-        await using var db = await contexts.CreateDbContextAsync();
-        var seats = await db.PanelMembers.Where(p => p.EvaluationId == id && p.Role == PanelRole.Assessor).ToListAsync();
-        foreach (var seat in seats)
+        foreach (var code in await AssessorCodesAsync(factory, id))
         {
-            seat.SubmittedAt = DateTimeOffset.UtcNow;
-            seat.Version++;
-        }
+            using var assessor = await factory.SignInAsync($"{code}@{DemoSeeder.Domain}");
+            var mine = await assessor.GetFromJsonAsync<JsonElement>($"/api/evaluations/{id}/declaration");
+            if (mine.TryGetProperty("namesConfirmedAt", out var confirmed) && confirmed.ValueKind == JsonValueKind.Null)
+            {
+                await OkAsync(await assessor.PostAsJsonAsync($"/api/evaluations/{id}/declaration/names", new { conflicts = Array.Empty<object>() }));
+            }
 
-        await db.SaveChangesAsync();
+            await OkAsync(await assessor.PostAsJsonAsync($"/api/evaluations/{id}/my/submit", new { }));
+        }
+    }
+
+    /// <summary>Each assessor confirms the names and declines every cell of one bidder, through their rating sheet.</summary>
+    public static async Task DeclineEverywhereAsync(DecideWebFactory factory, Guid id, string alternative, string reason)
+    {
+        foreach (var code in await AssessorCodesAsync(factory, id))
+        {
+            using var assessor = await factory.SignInAsync($"{code}@{DemoSeeder.Domain}");
+            await OkAsync(await assessor.PostAsJsonAsync($"/api/evaluations/{id}/declaration/names", new { conflicts = Array.Empty<object>() }));
+            var sheet = await assessor.GetFromJsonAsync<JsonElement>($"/api/evaluations/{id}/my/sheet");
+            foreach (var cell in sheet.GetProperty("cells").EnumerateArray().Where(c => c.GetProperty("alternative").GetString() == alternative))
+            {
+                await OkAsync(await assessor.PutAsJsonAsync(
+                    $"/api/evaluations/{id}/my/ratings/{alternative}/{cell.GetProperty("criterion").GetString()}", new { declined = reason }));
+            }
+        }
+    }
+
+    private static async Task<IReadOnlyList<string>> AssessorCodesAsync(DecideWebFactory factory, Guid id)
+    {
+        using var client = await factory.SignInAsync(CopyFacilitator);
+        var detail = await client.GetFromJsonAsync<JsonElement>($"/api/evaluations/{id}");
+        return detail.GetProperty("panel").EnumerateArray()
+            .Where(s => s.GetProperty("role").GetString() == "assessor")
+            .Select(s => s.GetProperty("assessorCode").GetString()!).ToArray();
     }
 
     /// <summary>Closes scoring and starts moderation.</summary>

@@ -83,7 +83,8 @@ public sealed class ResultsTests(DecideWebFactory factory) : IClassFixture<Decid
     [Fact]
     public async Task An_evaluation_that_cannot_be_analysed_gets_the_engines_errors_by_json_path()
     {
-        // A bid registered after the plan was locked has no ratings and no price: the engine refuses to rank.
+        // A bid registered after the plan was locked: every assessor declines it (outside what they were briefed on)
+        // and nobody enters its price, so the engine refuses to rank rather than impute.
         var id = await EvaluationCopies.ImportDemoCopyAsync(factory);
         await EvaluationCopies.SetUpAsync(factory, id, 1, [DecideWebFactory.Approver]);
         using var client = await factory.SignInAsync(EvaluationCopies.CopyFacilitator);
@@ -98,12 +99,13 @@ public sealed class ResultsTests(DecideWebFactory factory) : IClassFixture<Decid
         Assert.Equal(HttpStatusCode.OK, put.StatusCode);
         detail = await client.GetFromJsonAsync<JsonElement>($"/api/evaluations/{id}");
         await client.PostAsJsonAsync($"/api/evaluations/{id}/open-scoring", new { version = detail.GetProperty("summary").GetProperty("version").GetInt64() });
+        await EvaluationCopies.DeclineEverywhereAsync(factory, id, "latecomer", "not covered by the briefing; left to the panel");
         await EvaluationCopies.SubmitAllSheetsAsync(factory, id);
         await EvaluationCopies.StartModerationAsync(factory, id);
 
         var problem = await EvaluationCopies.ProblemAsync(await client.GetAsync($"/api/evaluations/{id}/results?draws=0"), HttpStatusCode.BadRequest);
         var paths = problem.GetProperty("errors").EnumerateObject().Select(p => p.Name).ToArray();
-        Assert.Contains("$.ratings.ravelle.latecomer.display", paths);
+        Assert.Contains("$.ratings.*.latecomer.display", paths);
         Assert.Contains(paths, p => p.StartsWith("$.values", StringComparison.Ordinal) && p.Contains("latecomer"));
     }
 }
