@@ -10,6 +10,8 @@ namespace Decide.Benchmarks;
 /// the result) and the validator alone, on a typical and a large synthetic panel under both weighting methods.
 /// </summary>
 [MemoryDiagnoser]
+[MinColumn]
+[MedianColumn]
 public class AnalysisBenchmarks
 {
     private Evaluation _evaluation = null!;

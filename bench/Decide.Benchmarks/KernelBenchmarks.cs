@@ -11,6 +11,8 @@ namespace Decide.Benchmarks;
 /// nothing (the Allocated column shows "-").
 /// </summary>
 [MemoryDiagnoser]
+[MinColumn]
+[MedianColumn]
 public class KernelBenchmarks
 {
     private Tfn[] _matrix = [];

@@ -13,6 +13,8 @@ namespace Decide.Benchmarks;
 /// on one matrix.
 /// </summary>
 [MemoryDiagnoser]
+[MinColumn]
+[MedianColumn]
 public class WeightingBenchmarks
 {
     /// <summary>Nine scored criteria plus the gate; four bids (they take no part in weighting).</summary>
