@@ -48,6 +48,7 @@ public static class EvaluationValidator
         private readonly Dictionary<string, CriterionGroup> _groups = new(StringComparer.Ordinal);
         private readonly Dictionary<string, Assessor> _assessors = new(StringComparer.Ordinal);
         private readonly HashSet<string> _alternatives = new(StringComparer.Ordinal);
+        private readonly Dictionary<IReadOnlyList<string>, HashSet<string>> _assignedSets = new(ReferenceEqualityComparer.Instance);
 
         public IReadOnlyList<EvaluationError> Errors => _found;
 
@@ -249,7 +250,7 @@ public static class EvaluationValidator
             var seen = new HashSet<(string, string)>();
             foreach (var gate in e.Gates)
             {
-                var at = JsonPath.Keys("$.gates", gate.Alternative, gate.Criterion);
+                string At() => JsonPath.Keys("$.gates", gate.Alternative, gate.Criterion);
                 if (!_alternatives.Contains(gate.Alternative))
                 {
                     Add(JsonPath.Key("$.gates", gate.Alternative), $"unknown alternative \"{gate.Alternative}\"");
@@ -258,19 +259,19 @@ public static class EvaluationValidator
 
                 if (!_criteria.TryGetValue(gate.Criterion, out var criterion))
                 {
-                    Add(at, $"unknown criterion \"{gate.Criterion}\"");
+                    Add(At(), $"unknown criterion \"{gate.Criterion}\"");
                     continue;
                 }
 
                 if (criterion.Kind != CriterionKind.Gate)
                 {
-                    Add(at, $"criterion \"{gate.Criterion}\" is {Describe(criterion.Kind)}, not a gate");
+                    Add(At(), $"criterion \"{gate.Criterion}\" is {Describe(criterion.Kind)}, not a gate");
                     continue;
                 }
 
                 if (!seen.Add((gate.Alternative, gate.Criterion)))
                 {
-                    Add(at, "this gate result is given twice");
+                    Add(At(), "this gate result is given twice");
                 }
 
                 if (!gate.Passed)
@@ -312,7 +313,7 @@ public static class EvaluationValidator
             var given = new Dictionary<string, HashSet<string>>(StringComparer.Ordinal);
             foreach (var rating in e.Importance)
             {
-                var at = JsonPath.Keys("$.importance", rating.Assessor, rating.Node);
+                string At() => JsonPath.Keys("$.importance", rating.Assessor, rating.Node);
                 if (!_assessors.ContainsKey(rating.Assessor))
                 {
                     Add(JsonPath.Key("$.importance", rating.Assessor), $"unknown assessor \"{rating.Assessor}\"");
@@ -321,7 +322,7 @@ public static class EvaluationValidator
 
                 if (!IsNode(rating.Node))
                 {
-                    Add(at, _criteria.TryGetValue(rating.Node, out var c) && c.Kind == CriterionKind.Gate
+                    Add(At(), _criteria.TryGetValue(rating.Node, out var c) && c.Kind == CriterionKind.Gate
                         ? $"\"{rating.Node}\" is a pass/fail gate and carries no weight"
                         : $"unknown criterion or group \"{rating.Node}\"");
                     continue;
@@ -329,19 +330,20 @@ public static class EvaluationValidator
 
                 if (!e.ImportanceScale.TryFind(rating.Term, out _))
                 {
-                    Add(at, $"unknown term \"{rating.Term}\"; the importance scale has {e.ImportanceScale.CodeList}");
+                    Add(At(), $"unknown term \"{rating.Term}\"; the importance scale has {e.ImportanceScale.CodeList}");
                 }
 
                 var set = given.TryGetValue(rating.Assessor, out var s) ? s : given[rating.Assessor] = new HashSet<string>(StringComparer.Ordinal);
                 if (!set.Add(rating.Node))
                 {
-                    Add(at, "importance is given twice");
+                    Add(At(), "importance is given twice");
                 }
             }
 
+            var all = Nodes().ToArray();
             foreach (var (assessor, nodes) in given)
             {
-                var missing = Nodes().Where(n => !nodes.Contains(n)).ToArray();
+                var missing = all.Where(n => !nodes.Contains(n)).ToArray();
                 if (missing.Length > 0)
                 {
                     Add(JsonPath.Key("$.importance", assessor),
@@ -373,52 +375,42 @@ public static class EvaluationValidator
             foreach (var judgement in e.Pairwise)
             {
                 var k = index[judgement.Assessor] = index.GetValueOrDefault(judgement.Assessor, -1) + 1;
-                var at = JsonPath.Index(JsonPath.Key("$.pairwise", judgement.Assessor), k);
+                string At() => PairwisePath(judgement.Assessor, k);
                 if (!_assessors.ContainsKey(judgement.Assessor))
                 {
                     Add(JsonPath.Key("$.pairwise", judgement.Assessor), $"unknown assessor \"{judgement.Assessor}\"");
                     continue;
                 }
 
-                var ok = true;
-                foreach (var (field, id) in new[] { ("row", judgement.Row), ("col", judgement.Col) })
-                {
-                    if (!IsNode(id))
-                    {
-                        Add($"{at}.{field}", _criteria.TryGetValue(id, out var c) && c.Kind == CriterionKind.Gate
-                            ? $"\"{id}\" is a pass/fail gate and is not weighed"
-                            : $"unknown criterion or group \"{id}\"");
-                        ok = false;
-                    }
-                }
-
-                if (!ok)
+                var rowIsNode = IsComparable(judgement.Row, judgement.Assessor, k, "row");
+                var colIsNode = IsComparable(judgement.Col, judgement.Assessor, k, "col");
+                if (!rowIsNode || !colIsNode)
                 {
                     continue;
                 }
 
                 if (judgement.Row == judgement.Col)
                 {
-                    Add(at, $"\"{judgement.Row}\" is compared with itself");
+                    Add(At(), $"\"{judgement.Row}\" is compared with itself");
                     continue;
                 }
 
                 if (ParentOf(judgement.Row) != ParentOf(judgement.Col))
                 {
-                    Add(at, $"\"{judgement.Row}\" and \"{judgement.Col}\" are not in the same group; compare criteria within a group, and groups with each other and with top-level criteria");
+                    Add(At(), $"\"{judgement.Row}\" and \"{judgement.Col}\" are not in the same group; compare criteria within a group, and groups with each other and with top-level criteria");
                     continue;
                 }
 
                 if (!(judgement.Value.Lower > 0))
                 {
-                    Add($"{at}.tfn", $"a pairwise judgement must be above 0; got {judgement.Value}");
+                    Add($"{At()}.tfn", $"a pairwise judgement must be above 0; got {judgement.Value}");
                 }
 
                 var set = pairs.TryGetValue(judgement.Assessor, out var s) ? s : pairs[judgement.Assessor] = [];
                 var key = string.CompareOrdinal(judgement.Row, judgement.Col) < 0 ? (judgement.Row, judgement.Col) : (judgement.Col, judgement.Row);
                 if (set.TryGetValue(key, out var first))
                 {
-                    Add(at, $"the pair {judgement.Row}–{judgement.Col} is already judged at index {first}; give each pair once");
+                    Add(At(), $"the pair {judgement.Row}–{judgement.Col} is already judged at index {first}; give each pair once");
                 }
                 else
                 {
@@ -452,6 +444,22 @@ public static class EvaluationValidator
             }
         }
 
+        private static string PairwisePath(string assessor, int k) => JsonPath.Index(JsonPath.Key("$.pairwise", assessor), k);
+
+        /// <summary>Whether a judgement's row or column names a weighted node; if not, says so at its field.</summary>
+        private bool IsComparable(string id, string assessor, int k, string field)
+        {
+            if (IsNode(id))
+            {
+                return true;
+            }
+
+            Add($"{PairwisePath(assessor, k)}.{field}", _criteria.TryGetValue(id, out var c) && c.Kind == CriterionKind.Gate
+                ? $"\"{id}\" is a pass/fail gate and is not weighed"
+                : $"unknown criterion or group \"{id}\"");
+            return false;
+        }
+
         private string ParentOf(string node) =>
             _criteria.TryGetValue(node, out var c) && c.Group is { } g ? g : "";
 
@@ -475,7 +483,7 @@ public static class EvaluationValidator
             var seen = new HashSet<(string, string)>();
             foreach (var value in e.Values)
             {
-                var at = JsonPath.Keys("$.values", value.Alternative, value.Criterion);
+                string At() => JsonPath.Keys("$.values", value.Alternative, value.Criterion);
                 if (!_alternatives.Contains(value.Alternative))
                 {
                     Add(JsonPath.Key("$.values", value.Alternative), $"unknown alternative \"{value.Alternative}\"");
@@ -484,32 +492,32 @@ public static class EvaluationValidator
 
                 if (!_criteria.TryGetValue(value.Criterion, out var criterion))
                 {
-                    Add(at, $"unknown criterion \"{value.Criterion}\"");
+                    Add(At(), $"unknown criterion \"{value.Criterion}\"");
                     continue;
                 }
 
                 if (criterion.Kind != CriterionKind.Numeric)
                 {
-                    Add(at, $"criterion \"{value.Criterion}\" is {Describe(criterion.Kind)}; only numeric criteria take values");
+                    Add(At(), $"criterion \"{value.Criterion}\" is {Describe(criterion.Kind)}; only numeric criteria take values");
                     continue;
                 }
 
                 if (!seen.Add((value.Alternative, value.Criterion)))
                 {
-                    Add(at, "this value is given twice");
+                    Add(At(), "this value is given twice");
                 }
 
                 if (!double.IsFinite(value.Value))
                 {
-                    Add(at, "the value must be a finite number");
+                    Add(At(), "the value must be a finite number");
                 }
                 else if (criterion.Direction == Direction.Cost && !(value.Value > 0))
                 {
-                    Add(at, $"cost criterion \"{value.Criterion}\" needs values above 0 (its normalisation divides by the value); got {value.Value}");
+                    Add(At(), $"cost criterion \"{value.Criterion}\" needs values above 0 (its normalisation divides by the value); got {value.Value}");
                 }
                 else if (value.Value < 0)
                 {
-                    Add(at, $"values must not be negative; got {value.Value}");
+                    Add(At(), $"values must not be negative; got {value.Value}");
                 }
             }
 
@@ -579,76 +587,95 @@ public static class EvaluationValidator
 
         private void Ratings(HashSet<string> excluded, HashSet<(string, string)> moderated)
         {
-            var cells = new Dictionary<(string Assessor, string Alternative, string Criterion), Rating>();
+            // A cell is numbered by the positions of its three ids, so that checking who rated what costs an array
+            // look-up rather than hashing three strings; a panel of 30 rating 100 bids on 50 criteria gives 150,000.
+            var assessorAt = Positions(_assessors.Keys);
+            var assessorOf = _assessors.Values.ToArray();
+            var alternativeAt = Positions(_alternatives);
+            var criterionAt = Positions(_criteria.Values.Where(c => c.Kind == CriterionKind.Linguistic).Select(c => c.Id));
+            int n = alternativeAt.Count, m = criterionAt.Count;
+            var cells = new Rating?[assessorAt.Count * n * m];
             foreach (var rating in e.Ratings)
             {
-                var at = JsonPath.Keys("$.ratings", rating.Assessor, rating.Alternative, rating.Criterion);
-                if (!_assessors.TryGetValue(rating.Assessor, out var assessor))
+                string At() => JsonPath.Keys("$.ratings", rating.Assessor, rating.Alternative, rating.Criterion);
+                if (!assessorAt.TryGetValue(rating.Assessor, out var a))
                 {
                     Add(JsonPath.Key("$.ratings", rating.Assessor), $"unknown assessor \"{rating.Assessor}\"");
                     continue;
                 }
 
-                if (!_alternatives.Contains(rating.Alternative))
+                if (!alternativeAt.TryGetValue(rating.Alternative, out var i))
                 {
                     Add(JsonPath.Keys("$.ratings", rating.Assessor, rating.Alternative), $"unknown alternative \"{rating.Alternative}\"");
                     continue;
                 }
 
-                if (!_criteria.TryGetValue(rating.Criterion, out var criterion))
+                if (!criterionAt.TryGetValue(rating.Criterion, out var j))
                 {
-                    Add(at, $"unknown criterion \"{rating.Criterion}\"");
+                    // Only linguistic criteria are numbered: this one is unknown or of another kind.
+                    Add(At(), !_criteria.TryGetValue(rating.Criterion, out var criterion)
+                        ? $"unknown criterion \"{rating.Criterion}\""
+                        : criterion.Kind == CriterionKind.Numeric
+                            ? $"criterion \"{rating.Criterion}\" is numeric; give its value under $.values, not a rating"
+                            : $"criterion \"{rating.Criterion}\" is a pass/fail gate; give its result under $.gates, not a rating");
                     continue;
                 }
 
-                if (criterion.Kind != CriterionKind.Linguistic)
+                if (!IsAssigned(assessorOf[a], rating.Criterion))
                 {
-                    Add(at, criterion.Kind == CriterionKind.Numeric
-                        ? $"criterion \"{rating.Criterion}\" is numeric; give its value under $.values, not a rating"
-                        : $"criterion \"{rating.Criterion}\" is a pass/fail gate; give its result under $.gates, not a rating");
+                    Add(At(), $"criterion \"{rating.Criterion}\" is not assigned to assessor \"{rating.Assessor}\"");
                     continue;
                 }
 
-                if (assessor.Criteria is { } assigned && !assigned.Contains(rating.Criterion))
+                ref var cell = ref cells[(((a * n) + i) * m) + j];
+                if (cell is not null)
                 {
-                    Add(at, $"criterion \"{rating.Criterion}\" is not assigned to assessor \"{rating.Assessor}\"");
+                    Add(At(), "this cell is rated twice");
                     continue;
                 }
 
-                if (!cells.TryAdd((rating.Assessor, rating.Alternative, rating.Criterion), rating))
-                {
-                    Add(at, "this cell is rated twice");
-                    continue;
-                }
-
+                cell = rating;
                 if (rating.Term is null == rating.Declined is null)
                 {
-                    Add(at, "give either a term or a reason for declining, not both and not neither");
+                    Add(At(), "give either a term or a reason for declining, not both and not neither");
                 }
                 else if (rating.Term is { } term && !e.RatingScale.TryFind(term, out _))
                 {
-                    Add(at, $"unknown term \"{term}\"; the rating scale has {e.RatingScale.CodeList}");
+                    Add(At(), $"unknown term \"{term}\"; the rating scale has {e.RatingScale.CodeList}");
                 }
                 else if (rating.Declined is { } reason && string.IsNullOrWhiteSpace(reason))
                 {
-                    Add(at, "a declined cell needs a reason (for example: recused, outside expertise)");
+                    Add(At(), "a declined cell needs a reason (for example: recused, outside expertise)");
                 }
             }
 
+            // Per assessor in panel order: the number of their id (-1 if it is not a valid id) and, per criterion,
+            // whether they rate it.
+            var numberOf = e.Assessors.Select(a => assessorAt.GetValueOrDefault(a.Id, -1)).ToArray();
+            var rates = new bool[e.Assessors.Count];
             foreach (var criterion in e.Criteria.Where(c => c.Kind == CriterionKind.Linguistic))
             {
+                var j = criterionAt.GetValueOrDefault(criterion.Id, -1);
+                for (var k = 0; k < rates.Length; k++)
+                {
+                    rates[k] = IsAssigned(e.Assessors[k], criterion.Id);
+                }
+
                 foreach (var alternative in e.Alternatives.Where(a => !excluded.Contains(a.Id)))
                 {
+                    var i = alternativeAt.GetValueOrDefault(alternative.Id, -1);
                     var rated = 0;
-                    var declined = new List<string>();
-                    foreach (var assessor in e.Assessors)
+                    List<string>? declined = null;
+                    for (var k = 0; k < rates.Length; k++)
                     {
-                        if (assessor.Criteria is { } assigned && !assigned.Contains(criterion.Id))
+                        if (!rates[k])
                         {
                             continue;
                         }
 
-                        if (!cells.TryGetValue((assessor.Id, alternative.Id, criterion.Id), out var rating))
+                        var assessor = e.Assessors[k];
+                        var rating = i >= 0 && j >= 0 && numberOf[k] >= 0 ? cells[(((numberOf[k] * n) + i) * m) + j] : null;
+                        if (rating is null)
                         {
                             Add(JsonPath.Keys("$.ratings", assessor.Id, alternative.Id, criterion.Id),
                                 $"assessor \"{assessor.Id}\" has neither rated alternative \"{alternative.Id}\" on criterion \"{criterion.Id}\" nor declined it with a reason");
@@ -659,18 +686,46 @@ public static class EvaluationValidator
                         }
                         else
                         {
-                            declined.Add($"{assessor.Id}: {rating.Declined}");
+                            (declined ??= []).Add($"{assessor.Id}: {rating.Declined}");
                         }
                     }
 
                     if (rated == 0 && !moderated.Contains((alternative.Id, criterion.Id)))
                     {
-                        var why = declined.Count > 0 ? $" (declined by {string.Join("; ", declined)})" : " (no assessor is assigned to it)";
+                        var why = declined is not null ? $" (declined by {string.Join("; ", declined)})" : " (no assessor is assigned to it)";
                         Add(JsonPath.Keys("$.ratings.*", alternative.Id, criterion.Id),
                             $"nobody rated alternative \"{alternative.Id}\" on criterion \"{criterion.Id}\"{why}; the analysis cannot proceed without at least one rating, and none is imputed");
                     }
                 }
             }
+        }
+
+        /// <summary>Whether the assessor rates the criterion: every linguistic one, or those in their list.</summary>
+        private bool IsAssigned(Assessor assessor, string criterion)
+        {
+            if (assessor.Criteria is not { } assigned)
+            {
+                return true;
+            }
+
+            if (!_assignedSets.TryGetValue(assigned, out var set))
+            {
+                set = new HashSet<string>(assigned, StringComparer.Ordinal);
+                _assignedSets[assigned] = set;
+            }
+
+            return set.Contains(criterion);
+        }
+
+        private static Dictionary<string, int> Positions(IEnumerable<string> ids)
+        {
+            var positions = new Dictionary<string, int>(StringComparer.Ordinal);
+            foreach (var id in ids)
+            {
+                positions.Add(id, positions.Count);
+            }
+
+            return positions;
         }
 
         private static string Describe(CriterionKind kind) => kind switch

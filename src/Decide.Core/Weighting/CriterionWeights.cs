@@ -102,7 +102,19 @@ public static class CriterionWeights
     {
         var node = new Dictionary<string, Tfn>(StringComparer.Ordinal);
         var reports = new List<MatrixConsistency>();
-        var judges = e.Assessors.Where(a => e.Pairwise.Any(p => p.Assessor == a.Id)).ToArray();
+        // Each assessor's judgements, in input order, gathered once rather than searched for per matrix.
+        var byAssessor = new Dictionary<string, List<PairwiseJudgement>>(StringComparer.Ordinal);
+        foreach (var p in e.Pairwise)
+        {
+            if (!byAssessor.TryGetValue(p.Assessor, out var own))
+            {
+                byAssessor[p.Assessor] = own = [];
+            }
+
+            own.Add(p);
+        }
+
+        var judges = e.Assessors.Where(a => byAssessor.ContainsKey(a.Id)).ToArray();
 
         var matrices = new List<(string? Group, string[] Items)>
         {
@@ -123,9 +135,12 @@ public static class CriterionWeights
             foreach (var judge in judges)
             {
                 var matrix = new FuzzyPairwiseMatrix(items);
-                foreach (var j in e.Pairwise.Where(p => p.Assessor == judge.Id && position.ContainsKey(p.Row) && position.ContainsKey(p.Col)))
+                foreach (var j in byAssessor[judge.Id])
                 {
-                    matrix.Set(position[j.Row], position[j.Col], j.Value);
+                    if (position.TryGetValue(j.Row, out var row) && position.TryGetValue(j.Col, out var col))
+                    {
+                        matrix.Set(row, col, j.Value);
+                    }
                 }
 
                 individual.Add(matrix);
