@@ -87,6 +87,15 @@ public static class EvaluationCopies
     /// <summary>Each assessor signs the declaration and submits the weights imported with the copy; then the plan is locked and scoring opened.</summary>
     public static async Task OpenScoringAsync(DecideWebFactory factory, Guid id)
     {
+        await SignAndSubmitWeightsAsync(factory, id);
+        using var client = await factory.SignInAsync(CopyFacilitator);
+        await TransitionAsync(client, id, "lock-plan");
+        await TransitionAsync(client, id, "open-scoring");
+    }
+
+    /// <summary>Each assessor signs the declaration and submits the weights imported with the copy.</summary>
+    public static async Task SignAndSubmitWeightsAsync(DecideWebFactory factory, Guid id)
+    {
         foreach (var code in await AssessorCodesAsync(factory, id))
         {
             using var assessor = await factory.SignInAsync($"{code}@{DemoSeeder.Domain}");
@@ -95,10 +104,6 @@ public static class EvaluationCopies
                 new { version = declaration.GetProperty("version").GetString(), accepted = true }));
             await OkAsync(await assessor.PostAsJsonAsync($"/api/evaluations/{id}/my/weights/submit", new { }));
         }
-
-        using var client = await factory.SignInAsync(CopyFacilitator);
-        await TransitionAsync(client, id, "lock-plan");
-        await TransitionAsync(client, id, "open-scoring");
     }
 
     /// <summary>Each assessor confirms the declaration with the bidders' names and submits the sheet imported with the copy.</summary>

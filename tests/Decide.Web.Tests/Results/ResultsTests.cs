@@ -87,9 +87,11 @@ public sealed class ResultsTests(DecideWebFactory factory) : IClassFixture<Decid
         // and nobody enters its price, so the engine refuses to rank rather than impute.
         var id = await EvaluationCopies.ImportDemoCopyAsync(factory);
         await EvaluationCopies.SetUpAsync(factory, id, 1, [DecideWebFactory.Approver]);
+        await EvaluationCopies.SignAndSubmitWeightsAsync(factory, id);
         using var client = await factory.SignInAsync(EvaluationCopies.CopyFacilitator);
         var detail = await client.GetFromJsonAsync<JsonElement>($"/api/evaluations/{id}");
-        await client.PostAsJsonAsync($"/api/evaluations/{id}/lock-plan", new { version = detail.GetProperty("summary").GetProperty("version").GetInt64() });
+        var locked = await client.PostAsJsonAsync($"/api/evaluations/{id}/lock-plan", new { version = detail.GetProperty("summary").GetProperty("version").GetInt64() });
+        Assert.Equal(HttpStatusCode.OK, locked.StatusCode);
         detail = await client.GetFromJsonAsync<JsonElement>($"/api/evaluations/{id}");
         var alternatives = detail.GetProperty("alternatives").EnumerateArray()
             .Select(a => new { code = a.GetProperty("code").GetString(), name = a.GetProperty("name").GetString() })
@@ -98,7 +100,8 @@ public sealed class ResultsTests(DecideWebFactory factory) : IClassFixture<Decid
             new { alternatives, version = detail.GetProperty("summary").GetProperty("version").GetInt64() });
         Assert.Equal(HttpStatusCode.OK, put.StatusCode);
         detail = await client.GetFromJsonAsync<JsonElement>($"/api/evaluations/{id}");
-        await client.PostAsJsonAsync($"/api/evaluations/{id}/open-scoring", new { version = detail.GetProperty("summary").GetProperty("version").GetInt64() });
+        var opened = await client.PostAsJsonAsync($"/api/evaluations/{id}/open-scoring", new { version = detail.GetProperty("summary").GetProperty("version").GetInt64() });
+        Assert.Equal(HttpStatusCode.OK, opened.StatusCode);
         await EvaluationCopies.DeclineEverywhereAsync(factory, id, "latecomer", "not covered by the briefing; left to the panel");
         await EvaluationCopies.SubmitAllSheetsAsync(factory, id);
         await EvaluationCopies.StartModerationAsync(factory, id);
