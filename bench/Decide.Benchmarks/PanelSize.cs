@@ -13,11 +13,15 @@ public sealed record PanelSize(string Name, int Alternatives, int Criteria, int 
     /// <summary>A large framework tender: 100 bids, 60 criteria, 30 assessors.</summary>
     public static PanelSize Large { get; } = new("Large", 100, 60, 30);
 
+    /// <summary>The robustness target's shape: 20 bids, 15 criteria (plus the gate), 5 assessors.</summary>
+    public static PanelSize Acceptability { get; } = new("Acceptability", 20, 16, 5);
+
     /// <summary>Looks a size up by its name (benchmark parameters are plain strings).</summary>
     public static PanelSize Named(string name) => name switch
     {
         "Typical" => Typical,
         "Large" => Large,
+        "Acceptability" => Acceptability,
         _ => throw new ArgumentOutOfRangeException(nameof(name), name, "Known panel sizes: Typical, Large."),
     };
 
