@@ -64,6 +64,7 @@ public sealed class DemoSeeder(
         await using var db = await factory.CreateDbContextAsync(ct);
         var stored = EvaluationImporter.Add(db, file, accounts, facilitator.Id, admin.Id, now);
         stored.Stage = EvaluationStage.Moderation;
+        stored.CreatedAt = now.AddDays(-30);
         stored.PlanLockedAt = now.AddDays(-20);
         stored.ScoringOpenedAt = now.AddDays(-12);
         stored.ModerationStartedAt = now.AddDays(-1);
