@@ -119,6 +119,41 @@ public sealed class JourneyTests(BrowserSite site) : IClassFixture<BrowserSite>
         watch.AssertClean();
     }
 
+    [Fact]
+    public async Task The_administrator_creates_an_account_and_its_holder_is_told_who_creates_evaluations()
+    {
+        var (context, page, watch) = await site.OpenAsync();
+        await using var _ = context;
+
+        await page.GotoAsync("/signin?returnUrl=%2Fadmin");
+        await new SignInPage(page).SignInAsync(DecideServer.Administrator, DecideServer.Password);
+        var admin = new AdministrationPage(page);
+        await Assertions.Expect(admin.Title).ToBeVisibleAsync();
+        await admin.WaitUntilInteractiveAsync();
+
+        // A password below the rules is refused, and the reason stands by the password field.
+        const string email = "tilbury@kestrel-vale.example";
+        await admin.CreateAccountAsync(email, "Morwenna Tilbury (Fleet Engineer)", "short");
+        await Assertions.Expect(page.GetByText("at least 12 characters").First).ToBeVisibleAsync();
+        await Assertions.Expect(admin.Accounts).Not.ToContainTextAsync(email);
+
+        const string password = "Tilbury-fleet-2026";
+        await admin.Password.FillAsync(password);
+        await admin.CreateAccount.ClickAsync();
+        await Assertions.Expect(admin.Accounts).ToContainTextAsync(email);
+        await Evidence.ScreenshotAsync(page, "08-administration");
+        await Evidence.AssertAccessibleAsync(page, "the administration screen");
+
+        await admin.SignOut.ClickAsync();
+        var signIn = new SignInPage(page);
+        await Assertions.Expect(signIn.Heading).ToBeVisibleAsync();
+        await signIn.SignInAsync(email, password);
+        var list = new EvaluationsPage(page);
+        await Assertions.Expect(list.Empty).ToContainTextAsync("An administrator creates evaluations");
+        await Evidence.ScreenshotAsync(page, "09-no-evaluations-yet");
+        watch.AssertClean();
+    }
+
     private static (AnalysisResult Analysis, RobustnessResult Robustness, Dictionary<string, string> Names) ExpectedDemo()
     {
         var file = EvaluationFileReader.ReadFile(Path.Combine(AppContext.BaseDirectory, "samples", DemoSeeder.DemoFile));

@@ -45,7 +45,7 @@ public sealed class BrowserSite : IAsyncLifetime
         catch (Exception e) when (e is PlaywrightException or TimeoutException)
         {
             throw new InvalidOperationException(
-                $"Chromium at {ChromiumPath} did not start within {LaunchTimeoutMs / 1000:0} s: {e.Message.Split('\n')[0]} Check that Debian's chromium package is installed and runs headless (chromium --headless --version).", e);
+                $"Chromium at {ChromiumPath} could not be started (the wait is at most {LaunchTimeoutMs / 1000:0} s): {e.Message.Split('\n')[0].TrimEnd('.')}. Check that Debian's chromium package is installed and runs headless: chromium --headless --no-sandbox --dump-dom about:blank", e);
         }
     }
 

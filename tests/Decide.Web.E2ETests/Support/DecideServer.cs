@@ -19,6 +19,7 @@ public sealed class DecideServer : WebApplicationFactory<Program>
 
     public const string Facilitator = "facilitator@" + DemoSeeder.Domain;
     public const string Observer = "probity@" + DemoSeeder.Domain;
+    public const string Administrator = "admin@decide.example";
     public const string Password = DemoSeeder.DemoPassword;
 
     public DecideServer()
