@@ -120,7 +120,7 @@ public sealed class JourneyTests(BrowserSite site) : IClassFixture<BrowserSite>
     }
 
     [Fact]
-    public async Task The_administrator_creates_an_account_and_its_holder_is_told_who_creates_evaluations()
+    public async Task The_administrator_creates_an_account_and_an_evaluation_and_the_new_holder_is_told_who_creates_evaluations()
     {
         var (context, page, watch) = await site.OpenAsync();
         await using var _ = context;
@@ -141,6 +141,16 @@ public sealed class JourneyTests(BrowserSite site) : IClassFixture<BrowserSite>
         await admin.Password.FillAsync(password);
         await admin.CreateAccount.ClickAsync();
         await Assertions.Expect(admin.Accounts).ToContainTextAsync(email);
+
+        // An evaluation for a facilitator without an account is refused, naming the address; with the demo facilitator it is created.
+        await admin.Reference.FillAsync("KVTA-2026-031");
+        await admin.EvaluationTitle.FillAsync("Depot charging equipment");
+        await admin.FacilitatorEmail.FillAsync("nobody@kestrel-vale.example");
+        await admin.CreateEvaluation.ClickAsync();
+        await Assertions.Expect(page.GetByText("no account has the e-mail address nobody@kestrel-vale.example")).ToBeVisibleAsync();
+        await admin.FacilitatorEmail.FillAsync(DecideServer.Facilitator);
+        await admin.CreateEvaluation.ClickAsync();
+        await Assertions.Expect(page.GetByText("Evaluation KVTA-2026-031 created")).ToBeVisibleAsync();
         await Evidence.ScreenshotAsync(page, "08-administration");
         await Evidence.AssertAccessibleAsync(page, "the administration screen");
 

@@ -15,6 +15,14 @@ public sealed class AdministrationPage(IPage page) : Screen(page)
 
     public ILocator CreateAccount => Page.GetByRole(AriaRole.Button, new() { Name = "Create account" });
 
+    public ILocator Reference => Page.GetByLabel("Buyer's reference");
+
+    public ILocator EvaluationTitle => Page.GetByLabel("Title", new() { Exact = true });
+
+    public ILocator FacilitatorEmail => Page.GetByLabel("Facilitator's e-mail address");
+
+    public ILocator CreateEvaluation => Page.GetByRole(AriaRole.Button, new() { Name = "Create evaluation" });
+
     public ILocator Accounts => Page.GetByRole(AriaRole.Table, new() { Name = "Accounts" });
 
     public async Task CreateAccountAsync(string email, string name, string password)
