@@ -2,7 +2,10 @@
 # What the tests need beyond the .NET SDK, installed from Debian's packages when missing.
 # Sourced by test.sh; each later need (a browser, PDF tools, a database server) adds a line to the list.
 
-test_packages=()   # Debian packages the tests need
+# Debian packages the tests need:
+#   chromium           the browser the Playwright tests drive (Playwright cannot download its own here)
+#   fonts-dejavu-core  a font for the pages the browser renders and photographs
+test_packages=(chromium fonts-dejavu-core)
 
 apt_install() {
   local sudo=""

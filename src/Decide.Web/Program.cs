@@ -1,4 +1,3 @@
-using Decide.Web.Api;
 using Decide.Web.Infrastructure;
 
 var builder = WebApplication.CreateBuilder(args);
@@ -6,6 +5,7 @@ var builder = WebApplication.CreateBuilder(args);
 builder.AddDecideStorage();
 builder.AddDecideIdentity();
 builder.AddDecideApi();
+builder.AddDecideScreens();
 builder.Services.AddDecideFeatures();
 
 var app = builder.Build();
@@ -13,6 +13,7 @@ var app = builder.Build();
 await app.PrepareDatabaseAsync();
 app.UseDecidePipeline();
 app.MapDecideApi();
+app.MapDecideScreens();
 
 app.Run();
 

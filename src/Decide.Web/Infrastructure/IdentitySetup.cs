@@ -7,12 +7,16 @@ namespace Decide.Web.Infrastructure;
 
 /// <summary>
 /// Local accounts with ASP.NET Core Identity: password rules and lockout; cookies for the browser and bearer
-/// tokens for scripts (one policy scheme picks by the Authorization header).
+/// tokens for scripts (one policy scheme picks by the Authorization header). An API caller without a valid sign-in
+/// gets 401/403; a person opening a screen is sent to the sign-in page.
 /// </summary>
 public static class IdentitySetup
 {
     /// <summary>The global role that may create accounts and evaluations.</summary>
     public const string AdministratorRole = "Administrator";
+
+    /// <summary>The sign-in screen (statically rendered, see Components/Pages/Account).</summary>
+    public const string SignInPath = "/signin";
 
     private const string Smart = "Decide";
 
@@ -36,8 +40,11 @@ public static class IdentitySetup
             o.ExpireTimeSpan = TimeSpan.FromHours(8);
             o.SlidingExpiration = true;
 
-            // An API caller gets a status code, never a redirect to a sign-in page.
-            o.Events.OnRedirectToLogin = context => Deny(context, StatusCodes.Status401Unauthorized);
+            // An API caller gets a status code, never a redirect to a sign-in page; a screen sends the person to sign in.
+            o.LoginPath = SignInPath;
+            o.Events.OnRedirectToLogin = context => IsScreen(context.Request)
+                ? Redirect(context)
+                : Deny(context, StatusCodes.Status401Unauthorized);
             o.Events.OnRedirectToAccessDenied = context => Deny(context, StatusCodes.Status403Forbidden);
         });
 
@@ -56,12 +63,29 @@ public static class IdentitySetup
                 o.SignIn.RequireConfirmedAccount = false;
             })
             .AddRoles<IdentityRole>()
+            .AddClaimsPrincipalFactory<DisplayNameClaims>()
             .AddEntityFrameworkStores<DecideDbContext>()
             .AddSignInManager()
             .AddDefaultTokenProviders();
 
         builder.Services.AddAuthorization();
         return builder;
+    }
+
+    /// <summary>
+    /// True for a browser opening a screen: a GET outside the API and the OpenAPI document that accepts HTML. Anything
+    /// else (scripts, fetches, the API) keeps plain status codes.
+    /// </summary>
+    private static bool IsScreen(HttpRequest request) =>
+        HttpMethods.IsGet(request.Method)
+        && !request.Path.StartsWithSegments("/api")
+        && !request.Path.StartsWithSegments("/openapi")
+        && request.Headers.Accept.ToString().Contains("text/html", StringComparison.OrdinalIgnoreCase);
+
+    private static Task Redirect(RedirectContext<Microsoft.AspNetCore.Authentication.Cookies.CookieAuthenticationOptions> context)
+    {
+        context.Response.Redirect(context.RedirectUri);
+        return Task.CompletedTask;
     }
 
     private static Task Deny(RedirectContext<Microsoft.AspNetCore.Authentication.Cookies.CookieAuthenticationOptions> context, int status)

@@ -32,7 +32,27 @@ public sealed class AccountService(
     /// </summary>
     public async Task<IResult> SignInAsync(SignInRequest request, bool useCookies, CancellationToken ct)
     {
-        signIn.AuthenticationScheme = useCookies ? IdentityConstants.ApplicationScheme : IdentityConstants.BearerScheme;
+        var outcome = await PasswordSignInAsync(request,
+            useCookies ? IdentityConstants.ApplicationScheme : IdentityConstants.BearerScheme, ct);
+        return outcome switch
+        {
+            SignInOutcome.LockedOut => TypedResults.Problem(statusCode: StatusCodes.Status423Locked, title: "Account locked",
+                detail: "Too many failed sign-ins: the account is locked for a while. Try again later or ask an administrator."),
+            SignInOutcome.Failed => TypedResults.Problem(statusCode: StatusCodes.Status401Unauthorized, title: "Sign-in failed",
+                detail: "The e-mail address or the password is wrong."),
+
+            // The sign-in manager has already written the cookie or the token response.
+            _ => TypedResults.Empty,
+        };
+    }
+
+    /// <summary>
+    /// Checks the password (counting failures towards lockout), signs in with <paramref name="scheme"/> when it is
+    /// right, and records the attempt in the system audit chain. Shared by the API and the sign-in screen.
+    /// </summary>
+    public async Task<SignInOutcome> PasswordSignInAsync(SignInRequest request, string scheme, CancellationToken ct)
+    {
+        signIn.AuthenticationScheme = scheme;
         var user = string.IsNullOrWhiteSpace(request.Email) ? null : await users.FindByEmailAsync(request.Email);
         var result = user is null
             ? Microsoft.AspNetCore.Identity.SignInResult.Failed
@@ -40,20 +60,7 @@ public sealed class AccountService(
 
         await RecordAsync(user, result.Succeeded ? "signin.succeeded" : result.IsLockedOut ? "signin.locked-out" : "signin.failed",
             request.Email, ct);
-        if (result.IsLockedOut)
-        {
-            return TypedResults.Problem(statusCode: StatusCodes.Status423Locked, title: "Account locked",
-                detail: "Too many failed sign-ins: the account is locked for a while. Try again later or ask an administrator.");
-        }
-
-        if (!result.Succeeded)
-        {
-            return TypedResults.Problem(statusCode: StatusCodes.Status401Unauthorized, title: "Sign-in failed",
-                detail: "The e-mail address or the password is wrong.");
-        }
-
-        // The sign-in manager has already written the cookie or the token response.
-        return TypedResults.Empty;
+        return result.Succeeded ? SignInOutcome.Succeeded : result.IsLockedOut ? SignInOutcome.LockedOut : SignInOutcome.Failed;
     }
 
     public async Task<AccountView> CreateAsync(CreateAccountRequest request, CancellationToken ct)
