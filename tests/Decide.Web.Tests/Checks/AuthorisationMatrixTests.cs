@@ -175,6 +175,7 @@ public sealed class AuthorisationMatrixTests(AuthorisationFixture fixture) : ICl
         {
             var response = await SendAsync(anonymous, endpoint, fixture.DemoId);
             Assert.True(response.StatusCode == HttpStatusCode.Unauthorized, $"{endpoint}: {(int)response.StatusCode}");
+            await ApiAssert.ProblemAsync(response, HttpStatusCode.Unauthorized, "sign in first");
         }
 
         var login = await anonymous.PostAsJsonAsync("/api/auth/login", new { email = DecideWebFactory.Facilitator, password = Decide.Web.Features.Accounts.DemoSeeder.DemoPassword });
