@@ -20,7 +20,16 @@ public static class ApiSetup
 
     public static WebApplicationBuilder AddDecideApi(this WebApplicationBuilder builder)
     {
-        builder.Services.AddProblemDetails();
+        // Refusals made by the framework (no token, wrong content type, body too large) carry no detail of their
+        // own; give each a sentence so that every problem document says what to do.
+        builder.Services.AddProblemDetails(o => o.CustomizeProblemDetails = c => c.ProblemDetails.Detail ??= c.ProblemDetails.Status switch
+        {
+            StatusCodes.Status401Unauthorized => "Sign in first: send the bearer token from POST /api/auth/login (Authorization: Bearer …).",
+            StatusCodes.Status405MethodNotAllowed => "This address does not accept that HTTP method; see /openapi/v1.json.",
+            StatusCodes.Status413PayloadTooLarge => $"The request body is larger than the limit of {MaxRequestBytes / (1024 * 1024)} MB.",
+            StatusCodes.Status415UnsupportedMediaType => "The request body must be JSON: send it with Content-Type: application/json.",
+            _ => null,
+        });
         builder.Services.AddExceptionHandler<ProblemHandler>();
         builder.Services.AddOpenApi("v1");
         builder.Services.AddHttpContextAccessor();

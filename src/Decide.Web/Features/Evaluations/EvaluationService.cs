@@ -367,14 +367,14 @@ public sealed class EvaluationService(
     public Task<EvaluationSummary> NewRevisionAsync(Guid id, RevisionRequest request, CancellationToken ct = default) =>
         UnitOfWork.RunAsync(factory, async db =>
         {
+            var m = await access.LoadAsync(db, id, ct);
+            m.Require(PanelRole.Facilitator);
+            m.RequireStage("open a new revision", EvaluationStage.PlanLocked, EvaluationStage.Scoring, EvaluationStage.Moderation, EvaluationStage.SignedOff);
             if (string.IsNullOrWhiteSpace(request.Reason) || request.Reason.Trim().Length < 10)
             {
                 throw DomainProblem.Invalid("reason", "say why a new revision is needed (at least 10 characters); it becomes part of the record");
             }
 
-            var m = await access.LoadAsync(db, id, ct);
-            m.Require(PanelRole.Facilitator);
-            m.RequireStage("open a new revision", EvaluationStage.PlanLocked, EvaluationStage.Scoring, EvaluationStage.Moderation, EvaluationStage.SignedOff);
             var old = m.Evaluation;
             var now = clock.GetUtcNow();
             var next = new StoredEvaluation
