@@ -234,20 +234,24 @@ public static class EvaluationFileWriter
         w.WriteEndObject();
     }
 
-    private static void WriteImportance(Utf8JsonWriter w, IReadOnlyList<ImportanceRating> importance)
+    /// <summary>
+    /// Writes <c>"name": { outerKey: { ... } }</c>: the items grouped by <paramref name="key"/> in first-seen order,
+    /// each group's members written by <paramref name="writeItem"/>. Nothing is written for no items.
+    /// </summary>
+    private static void WriteKeyed<T>(Utf8JsonWriter w, string name, IReadOnlyList<T> items, Func<T, string> key, Action<Utf8JsonWriter, T> writeItem)
     {
-        if (importance.Count == 0)
+        if (items.Count == 0)
         {
             return;
         }
 
-        w.WriteStartObject("importance");
-        foreach (var byAssessor in importance.GroupBy(r => r.Assessor, StringComparer.Ordinal))
+        w.WriteStartObject(name);
+        foreach (var group in items.GroupBy(key, StringComparer.Ordinal))
         {
-            w.WriteStartObject(byAssessor.Key);
-            foreach (var rating in byAssessor)
+            w.WriteStartObject(group.Key);
+            foreach (var item in group)
             {
-                w.WriteString(rating.Node, rating.Term);
+                writeItem(w, item);
             }
 
             w.WriteEndObject();
@@ -255,6 +259,10 @@ public static class EvaluationFileWriter
 
         w.WriteEndObject();
     }
+
+    private static void WriteImportance(Utf8JsonWriter w, IReadOnlyList<ImportanceRating> importance) =>
+        WriteKeyed(w, "importance", importance, r => r.Assessor, (w, r) => w.WriteString(r.Node, r.Term));
+
 
     private static void WritePairwise(Utf8JsonWriter w, IReadOnlyList<PairwiseJudgement> pairwise, LinguisticScale scale)
     {
@@ -364,56 +372,21 @@ public static class EvaluationFileWriter
         w.WriteEndObject();
     }
 
-    private static void WriteValues(Utf8JsonWriter w, IReadOnlyList<NumericValue> values)
-    {
-        if (values.Count == 0)
-        {
-            return;
-        }
+    private static void WriteValues(Utf8JsonWriter w, IReadOnlyList<NumericValue> values) =>
+        WriteKeyed(w, "values", values, v => v.Alternative, (w, v) => w.WriteNumber(v.Criterion, v.Value));
 
-        w.WriteStartObject("values");
-        foreach (var byAlternative in values.GroupBy(v => v.Alternative, StringComparer.Ordinal))
+    private static void WriteGates(Utf8JsonWriter w, IReadOnlyList<GateResult> gates) =>
+        WriteKeyed(w, "gates", gates, g => g.Alternative, static (w, gate) =>
         {
-            w.WriteStartObject(byAlternative.Key);
-            foreach (var value in byAlternative)
+            if (gate.Note is null)
             {
-                w.WriteNumber(value.Criterion, value.Value);
+                w.WriteBoolean(gate.Criterion, gate.Passed);
+                return;
             }
 
+            w.WriteStartObject(gate.Criterion);
+            w.WriteBoolean("passed", gate.Passed);
+            w.WriteString("note", gate.Note);
             w.WriteEndObject();
-        }
-
-        w.WriteEndObject();
-    }
-
-    private static void WriteGates(Utf8JsonWriter w, IReadOnlyList<GateResult> gates)
-    {
-        if (gates.Count == 0)
-        {
-            return;
-        }
-
-        w.WriteStartObject("gates");
-        foreach (var byAlternative in gates.GroupBy(g => g.Alternative, StringComparer.Ordinal))
-        {
-            w.WriteStartObject(byAlternative.Key);
-            foreach (var gate in byAlternative)
-            {
-                if (gate.Note is null)
-                {
-                    w.WriteBoolean(gate.Criterion, gate.Passed);
-                    continue;
-                }
-
-                w.WriteStartObject(gate.Criterion);
-                w.WriteBoolean("passed", gate.Passed);
-                w.WriteString("note", gate.Note);
-                w.WriteEndObject();
-            }
-
-            w.WriteEndObject();
-        }
-
-        w.WriteEndObject();
-    }
+        });
 }
