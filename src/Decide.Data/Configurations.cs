@@ -111,6 +111,26 @@ internal sealed class ApprovalConfiguration : IEntityTypeConfiguration<Approval>
     }
 }
 
+internal sealed class ArchivedRecordConfiguration : IEntityTypeConfiguration<ArchivedRecord>
+{
+    public void Configure(EntityTypeBuilder<ArchivedRecord> e)
+    {
+        e.ToTable("archived_records");
+        e.HasKey(x => x.Id);
+        e.Property(x => x.Kind).HasMaxLength(20);
+        e.Property(x => x.AlternativeCode).HasMaxLength(100);
+        e.Property(x => x.FileName).HasMaxLength(300);
+        e.Property(x => x.Content).HasMaxLength(50_000_000);
+        e.Property(x => x.SnapshotJson).HasMaxLength(20_000_000);
+        e.Property(x => x.Sha256).HasMaxLength(64);
+        e.Property(x => x.SnapshotSha256).HasMaxLength(64);
+        e.Property(x => x.CertificateThumbprint).HasMaxLength(128);
+        e.Property(x => x.AuditHead).HasMaxLength(64);
+        e.HasIndex(x => new { x.EvaluationId, x.Kind, x.AlternativeCode }).IsUnique();
+        e.HasIndex(x => x.Sha256);
+    }
+}
+
 internal sealed class AuditEntryConfiguration : IEntityTypeConfiguration<AuditEntry>
 {
     public void Configure(EntityTypeBuilder<AuditEntry> e)

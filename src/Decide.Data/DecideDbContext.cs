@@ -1,4 +1,5 @@
 using Decide.Data.Entities;
+using Microsoft.AspNetCore.DataProtection.EntityFrameworkCore;
 using Microsoft.AspNetCore.Identity.EntityFrameworkCore;
 using Microsoft.EntityFrameworkCore;
 
@@ -6,9 +7,11 @@ namespace Decide.Data;
 
 /// <summary>
 /// The database of the service: accounts (ASP.NET Core Identity), evaluations with their panels, bids and inputs,
-/// and the audit chains. Use one short-lived context per operation (from <c>IDbContextFactory</c>).
+/// the audit chains, the archived records, and the Data Protection keys that every instance of the service shares.
+/// Use one short-lived context per operation (from <c>IDbContextFactory</c>).
 /// </summary>
-public sealed class DecideDbContext(DbContextOptions<DecideDbContext> options) : IdentityDbContext<DecideUser>(options)
+public sealed class DecideDbContext(DbContextOptions<DecideDbContext> options)
+    : IdentityDbContext<DecideUser>(options), IDataProtectionKeyContext
 {
     public DbSet<StoredEvaluation> Evaluations => Set<StoredEvaluation>();
 
@@ -31,6 +34,11 @@ public sealed class DecideDbContext(DbContextOptions<DecideDbContext> options) :
     public DbSet<Approval> Approvals => Set<Approval>();
 
     public DbSet<AuditEntry> Audit => Set<AuditEntry>();
+
+    public DbSet<ArchivedRecord> Archive => Set<ArchivedRecord>();
+
+    /// <summary>ASP.NET Core Data Protection keys (cookies, antiforgery), shared by every instance.</summary>
+    public DbSet<DataProtectionKey> DataProtectionKeys => Set<DataProtectionKey>();
 
     protected override void OnModelCreating(ModelBuilder builder)
     {

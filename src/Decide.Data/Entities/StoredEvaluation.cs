@@ -54,6 +54,15 @@ public sealed class StoredEvaluation
 
     public DateTimeOffset? SignedOffAt { get; set; }
 
+    /// <summary>When the facilitator asked the approvers to sign off; approvals are accepted only after that.</summary>
+    public DateTimeOffset? SignOffRequestedAt { get; set; }
+
+    /// <summary>The facilitator who asked (user id).</summary>
+    public string? SignOffRequestedBy { get; set; }
+
+    /// <summary>What the facilitator told the approvers when asking (the recommendation in their words).</summary>
+    public string? SignOffRequestNote { get; set; }
+
     /// <summary>A legal hold stops any retention-based disposal.</summary>
     public bool LegalHold { get; set; }
 

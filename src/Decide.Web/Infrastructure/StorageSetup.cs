@@ -1,5 +1,6 @@
 using Decide.Data;
 using Decide.Web.Features.Accounts;
+using Microsoft.AspNetCore.DataProtection;
 using Microsoft.EntityFrameworkCore;
 
 namespace Decide.Web.Infrastructure;
@@ -43,6 +44,12 @@ public static class StorageSetup
 
         builder.Services.AddDbContextFactory<DecideDbContext>(db => db.UseSqlite(
             connectionString, sqlite => sqlite.MigrationsAssembly("Decide.Data.Sqlite")));
+
+        // The keys that protect cookies and antiforgery tokens live in the database, so that every instance of the
+        // service accepts what any other issued, and a restart does not sign everyone out.
+        builder.Services.AddDataProtection()
+            .SetApplicationName("Decide")
+            .PersistKeysToDbContext<DecideDbContext>();
         return builder;
     }
 

@@ -82,6 +82,7 @@ public sealed class AuthorisationMatrixTests(AuthorisationFixture fixture) : ICl
 
         ["GET /api/evaluations/{id:guid}/approvals/"] = "1433AAA3",
         ["POST /api/evaluations/{id:guid}/approvals/"] = "143333A3",
+        ["POST /api/evaluations/{id:guid}/approvals/request"] = "1433A333",
     };
 
     public static TheoryData<string> CallerRows() => new(Callers);

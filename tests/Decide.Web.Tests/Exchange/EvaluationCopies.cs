@@ -165,6 +165,16 @@ public static class EvaluationCopies
         return id;
     }
 
+    /// <summary>A copy of the demo at stage Moderation whose facilitator has asked the approvers to sign off.</summary>
+    public static async Task<Guid> CopyAwaitingSignOffAsync(DecideWebFactory factory, int requiredApprovals = 1, IReadOnlyList<string>? approvers = null)
+    {
+        var id = await CopyAtModerationAsync(factory, requiredApprovals, approvers);
+        using var client = await factory.SignInAsync(CopyFacilitator);
+        await OkAsync(await client.PostAsJsonAsync($"/api/evaluations/{id}/approvals/request",
+            new { note = "The panel recommends the top-ranked supplier; moderation is complete." }));
+        return id;
+    }
+
     /// <summary>Creates an account unless it exists (administrator).</summary>
     public static async Task EnsureAccountAsync(DecideWebFactory factory, string email, string name)
     {

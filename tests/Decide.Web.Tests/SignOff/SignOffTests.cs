@@ -15,7 +15,7 @@ public sealed class SignOffTests(DecideWebFactory factory) : IClassFixture<Decid
     [Fact]
     public async Task A_wrong_password_is_refused_and_audited_without_the_password()
     {
-        var id = await EvaluationCopies.CopyAtModerationAsync(factory);
+        var id = await EvaluationCopies.CopyAwaitingSignOffAsync(factory);
         using var approver = await factory.SignInAsync(DecideWebFactory.Approver);
         const string wrong = "Not-the-password-2026";
         var response = await approver.PostAsJsonAsync($"/api/evaluations/{id}/approvals", new { password = wrong, statement = Statement });
@@ -35,7 +35,7 @@ public sealed class SignOffTests(DecideWebFactory factory) : IClassFixture<Decid
     [Fact]
     public async Task One_required_approval_signs_the_evaluation_off_and_the_approval_is_audited()
     {
-        var id = await EvaluationCopies.CopyAtModerationAsync(factory);
+        var id = await EvaluationCopies.CopyAwaitingSignOffAsync(factory);
         using var approver = await factory.SignInAsync(DecideWebFactory.Approver);
         var response = await approver.PostAsJsonAsync($"/api/evaluations/{id}/approvals",
             new { password = DemoSeeder.DemoPassword, statement = Statement });
@@ -55,7 +55,7 @@ public sealed class SignOffTests(DecideWebFactory factory) : IClassFixture<Decid
     public async Task Two_required_approvals_need_two_approvers_and_nobody_approves_twice()
     {
         await EvaluationCopies.EnsureAccountAsync(factory, SecondApprover, "Ada Quennell (Treasurer, approver)");
-        var id = await EvaluationCopies.CopyAtModerationAsync(factory, 2, [DecideWebFactory.Approver, SecondApprover]);
+        var id = await EvaluationCopies.CopyAwaitingSignOffAsync(factory, 2, [DecideWebFactory.Approver, SecondApprover]);
         var url = $"/api/evaluations/{id}/approvals";
 
         using var first = await factory.SignInAsync(DecideWebFactory.Approver);
@@ -88,7 +88,11 @@ public sealed class SignOffTests(DecideWebFactory factory) : IClassFixture<Decid
         }
 
         using var approver = await factory.SignInAsync(DecideWebFactory.Approver);
-        var bare = await approver.PostAsJsonAsync($"/api/evaluations/{id}/approvals", new { password = DemoSeeder.DemoPassword, statement = "" });
+        var unasked = await approver.PostAsJsonAsync($"/api/evaluations/{id}/approvals", new { password = DemoSeeder.DemoPassword, statement = Statement });
+        Assert.Contains("has not asked for sign-off", (await EvaluationCopies.ProblemAsync(unasked, HttpStatusCode.Conflict)).GetProperty("detail").GetString());
+
+        var asked = await EvaluationCopies.CopyAwaitingSignOffAsync(factory);
+        var bare = await approver.PostAsJsonAsync($"/api/evaluations/{asked}/approvals", new { password = DemoSeeder.DemoPassword, statement = "" });
         Assert.Contains("what you approve", (await EvaluationCopies.ProblemAsync(bare, HttpStatusCode.BadRequest)).GetProperty("errors").GetProperty("statement")[0].GetString());
 
         var early = await EvaluationCopies.ImportDemoCopyAsync(factory);
@@ -100,7 +104,7 @@ public sealed class SignOffTests(DecideWebFactory factory) : IClassFixture<Decid
     [Fact]
     public async Task A_reopened_sheet_blocks_approval_until_it_is_submitted_again()
     {
-        var id = await EvaluationCopies.CopyAtModerationAsync(factory);
+        var id = await EvaluationCopies.CopyAwaitingSignOffAsync(factory);
         using (var facilitator = await factory.SignInAsync(EvaluationCopies.CopyFacilitator))
         {
             var reopen = await facilitator.PostAsJsonAsync($"/api/evaluations/{id}/sheets/ellingsby/reopen", new { reason = "Ellingsby is correcting a rationale." });
@@ -115,7 +119,7 @@ public sealed class SignOffTests(DecideWebFactory factory) : IClassFixture<Decid
     [Fact]
     public async Task After_sign_off_every_change_is_refused_and_the_record_stays_readable()
     {
-        var id = await EvaluationCopies.CopyAtModerationAsync(factory);
+        var id = await EvaluationCopies.CopyAwaitingSignOffAsync(factory);
         using (var approver = await factory.SignInAsync(DecideWebFactory.Approver))
         {
             Assert.Equal(HttpStatusCode.OK, (await approver.PostAsJsonAsync($"/api/evaluations/{id}/approvals",
@@ -149,5 +153,43 @@ public sealed class SignOffTests(DecideWebFactory factory) : IClassFixture<Decid
         Assert.Equal(HttpStatusCode.OK, (await client.GetAsync($"/api/evaluations/{id}/results?draws=0")).StatusCode);
         Assert.Equal(HttpStatusCode.OK, (await client.GetAsync($"/api/evaluations/{id}/moderation")).StatusCode);
         Assert.Equal(HttpStatusCode.OK, (await client.GetAsync($"/api/evaluations/{id}/export")).StatusCode);
+    }
+
+    [Fact]
+    public async Task The_facilitator_asks_for_sign_off_once_with_a_note_when_every_sheet_is_in()
+    {
+        var id = await EvaluationCopies.CopyAtModerationAsync(factory);
+        var url = $"/api/evaluations/{id}/approvals/request";
+        using (var approver = await factory.SignInAsync(DecideWebFactory.Approver))
+        {
+            var notMine = await approver.PostAsJsonAsync(url, new { note = "The panel recommends the top-ranked supplier." });
+            Assert.Contains("role facilitator", (await EvaluationCopies.ProblemAsync(notMine, HttpStatusCode.Forbidden)).GetProperty("detail").GetString());
+        }
+
+        using var facilitator = await factory.SignInAsync(EvaluationCopies.CopyFacilitator);
+        var bare = await facilitator.PostAsJsonAsync(url, new { note = " " });
+        Assert.Contains("what you recommend", (await EvaluationCopies.ProblemAsync(bare, HttpStatusCode.BadRequest)).GetProperty("errors").GetProperty("note")[0].GetString());
+
+        var reopen = await facilitator.PostAsJsonAsync($"/api/evaluations/{id}/sheets/ellingsby/reopen", new { reason = "Ellingsby is correcting a rationale." });
+        Assert.Equal(HttpStatusCode.OK, reopen.StatusCode);
+        var open = await facilitator.PostAsJsonAsync(url, new { note = "The panel recommends the top-ranked supplier." });
+        Assert.Contains("ellingsby", (await EvaluationCopies.ProblemAsync(open, HttpStatusCode.Conflict)).GetProperty("detail").GetString());
+        using (var ellingsby = await factory.SignInAsync("ellingsby@" + DemoSeeder.Domain))
+        {
+            Assert.Equal(HttpStatusCode.OK, (await ellingsby.PostAsJsonAsync($"/api/evaluations/{id}/my/submit", new { })).StatusCode);
+        }
+
+        const string note = "The panel recommends the top-ranked supplier; moderation minutes attached.";
+        var asked = await facilitator.PostAsJsonAsync(url, new { note });
+        Assert.Equal(HttpStatusCode.OK, asked.StatusCode);
+        var state = await asked.Content.ReadFromJsonAsync<JsonElement>();
+        Assert.Equal(note, state.GetProperty("requestNote").GetString());
+        Assert.Equal(JsonValueKind.String, state.GetProperty("requestedAt").ValueKind);
+        Assert.False(string.IsNullOrEmpty(state.GetProperty("requestedBy").GetString()));
+
+        var twice = await facilitator.PostAsJsonAsync(url, new { note });
+        Assert.Contains("already requested", (await EvaluationCopies.ProblemAsync(twice, HttpStatusCode.Conflict)).GetProperty("detail").GetString());
+        var requested = (await EvaluationCopies.AuditAsync(factory, id)).EnumerateArray().Single(e => e.GetProperty("action").GetString() == "signoff.requested");
+        Assert.Contains(note, requested.GetProperty("newValue").GetString());
     }
 }

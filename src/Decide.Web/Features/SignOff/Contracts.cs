@@ -7,6 +7,11 @@ namespace Decide.Web.Features.SignOff;
 /// <param name="Statement">What the approver approves and why (the decision-maker's own rationale).</param>
 public sealed record ApprovalRequest(string? Password, string? Statement);
 
+/// <summary>The facilitator asks the approvers to sign off.</summary>
+/// <param name="Note">What the facilitator tells the approvers: the recommendation and anything they should weigh.</param>
+/// <param name="Version">The evaluation's version as last read; a stale one is refused.</param>
+public sealed record SignOffRequest(string? Note, long? Version);
+
 /// <summary>One recorded approval.</summary>
 public sealed record ApprovalView(string Approver, string Statement, DateTimeOffset ApprovedAt);
 
@@ -15,4 +20,10 @@ public sealed record ApprovalView(string Approver, string Statement, DateTimeOff
 /// <param name="Required">Approvals the evaluation needs.</param>
 /// <param name="SignedOffAt">When it was signed off, if it was.</param>
 /// <param name="Approvals">Every approval so far, oldest first.</param>
-public sealed record SignOffState(EvaluationStage Stage, int Required, DateTimeOffset? SignedOffAt, IReadOnlyList<ApprovalView> Approvals);
+/// <param name="RequestedAt">When the facilitator asked for sign-off; approvals are accepted only after that.</param>
+/// <param name="RequestedBy">Who asked.</param>
+/// <param name="RequestNote">What they told the approvers.</param>
+/// <param name="Version">The evaluation's version, for the next change.</param>
+public sealed record SignOffState(
+    EvaluationStage Stage, int Required, DateTimeOffset? SignedOffAt, IReadOnlyList<ApprovalView> Approvals,
+    DateTimeOffset? RequestedAt, string? RequestedBy, string? RequestNote, long Version);

@@ -13,9 +13,9 @@ using Microsoft.EntityFrameworkCore;
 namespace Decide.Web.Features.SignOff;
 
 /// <summary>
-/// Minimal sign-off: each approver confirms with their password and a statement; when the plan's number of
-/// approvals is reached the evaluation becomes SignedOff and read-only forever. Each approval is audited with the
-/// SHA-256 of the evaluation file it approved.
+/// Sign-off: the facilitator asks for it once moderation is done and every sheet is submitted; each approver then
+/// confirms with their password and a statement; when the plan's number of approvals is reached the evaluation
+/// becomes SignedOff and read-only forever. Each step is audited with the SHA-256 of the evaluation file it concerned.
 /// </summary>
 public sealed class SignOffService(
     IDbContextFactory<DecideDbContext> factory,
@@ -39,6 +39,57 @@ public sealed class SignOffService(
         var m = await access.LoadAsync(db, id, ct);
         m.Require(PanelRole.Facilitator, PanelRole.Observer, PanelRole.Approver);
         return await StateAsync(db, m.Evaluation, ct);
+    }
+
+    /// <summary>Shortest note accepted with a sign-off request, in characters.</summary>
+    public const int MinNoteLength = 10;
+
+    /// <summary>
+    /// The facilitator asks the approvers to sign off (moderation stage, every sheet submitted, the evaluation
+    /// complete enough to analyse). Asked once; the approvers see the note beside the results.
+    /// </summary>
+    public Task<SignOffState> RequestAsync(Guid id, SignOffRequest request, CancellationToken ct = default)
+    {
+        var note = request.Note?.Trim() ?? "";
+        return UnitOfWork.RunAsync(factory, async db =>
+        {
+            var m = await access.LoadAsync(db, id, ct);
+            m.Require(PanelRole.Facilitator);
+            m.RequireStage("ask for sign-off", EvaluationStage.Moderation);
+            var e = m.Evaluation;
+            if (request.Version is { } version && version != e.Version)
+            {
+                throw DomainProblem.Concurrency("The evaluation", await StateAsync(db, e, ct));
+            }
+
+            if (e.SignOffRequestedAt is { } asked)
+            {
+                throw DomainProblem.Stage($"Sign-off was already requested on {asked:yyyy-MM-dd HH:mm} UTC; the approvers have it.");
+            }
+
+            if (note.Length is < MinNoteLength or > MaxStatementLength)
+            {
+                throw DomainProblem.Invalid("note", $"tell the approvers what you recommend and why ({MinNoteLength} to {MaxStatementLength} characters); it becomes part of the record");
+            }
+
+            var open = e.Panel.Where(p => p.Role == PanelRole.Assessor && p.SubmittedAt is null).Select(p => p.AssessorCode).ToArray();
+            if (open.Length > 0)
+            {
+                throw DomainProblem.Stage($"Cannot ask for sign-off: the rating sheet of {string.Join(", ", open)} is not submitted.");
+            }
+
+            var file = await composer.ComposeAsync(db, e, ct);
+            DecisionEngine.Prepare(file.Evaluation);
+            var hash = Fingerprint(file);
+            e.SignOffRequestedAt = clock.GetUtcNow();
+            e.SignOffRequestedBy = user.Id;
+            e.SignOffRequestNote = note;
+            e.Version++;
+            await audit.RecordAsync(db, id, new AuditEvent("signoff.requested", $"evaluations/{id}/sign-off", null,
+                $"{note} (evaluation file sha256 {hash})"), ct);
+            await EvaluationService.SaveAsync(db, e, ct);
+            return await StateAsync(db, e, ct);
+        }, ct);
     }
 
     /// <summary>
@@ -95,7 +146,7 @@ public sealed class SignOffService(
             // What is approved is exactly what the engine would analyse now; it must be complete.
             var file = await composer.ComposeAsync(db, m.Evaluation, ct);
             DecisionEngine.Prepare(file.Evaluation);
-            var hash = Convert.ToHexStringLower(SHA256.HashData(Encoding.UTF8.GetBytes(EvaluationFileWriter.ToJson(file))));
+            var hash = Fingerprint(file);
 
             var now = clock.GetUtcNow();
             db.Approvals.Add(new Approval { EvaluationId = id, UserId = user.Id, Statement = statement, ApprovedAt = now });
@@ -120,6 +171,11 @@ public sealed class SignOffService(
     {
         m.Require(PanelRole.Approver);
         m.RequireStage("approve", EvaluationStage.Moderation);
+        if (m.Evaluation.SignOffRequestedAt is null)
+        {
+            throw DomainProblem.Stage($"The facilitator has not asked for sign-off of evaluation {m.Evaluation.Reference} yet; approvals open once they do.");
+        }
+
         var mine = await db.Approvals.AsNoTracking().FirstOrDefaultAsync(a => a.EvaluationId == m.Evaluation.Id && a.UserId == user.Id, ct);
         if (mine is not null)
         {
@@ -133,6 +189,9 @@ public sealed class SignOffService(
         }
     }
 
+    private static string Fingerprint(EvaluationFile file) =>
+        Convert.ToHexStringLower(SHA256.HashData(Encoding.UTF8.GetBytes(EvaluationFileWriter.ToJson(file))));
+
     private Task RecordRefusalAsync(Guid id, string why, CancellationToken ct) =>
         UnitOfWork.RunAsync(factory, async db =>
         {
@@ -143,9 +202,10 @@ public sealed class SignOffService(
     private static async Task<SignOffState> StateAsync(DecideDbContext db, StoredEvaluation e, CancellationToken ct)
     {
         var approvals = await db.Approvals.AsNoTracking().Where(a => a.EvaluationId == e.Id).OrderBy(a => a.Id).ToListAsync(ct);
-        var ids = approvals.Select(a => a.UserId).ToArray();
+        var ids = approvals.Select(a => a.UserId).Append(e.SignOffRequestedBy ?? "").ToArray();
         var names = await db.Users.AsNoTracking().Where(u => ids.Contains(u.Id)).ToDictionaryAsync(u => u.Id, u => u.DisplayName, ct);
         return new SignOffState(e.Stage, e.RequiredApprovals, e.SignedOffAt,
-            approvals.Select(a => new ApprovalView(names.GetValueOrDefault(a.UserId, a.UserId), a.Statement, a.ApprovedAt)).ToArray());
+            approvals.Select(a => new ApprovalView(names.GetValueOrDefault(a.UserId, a.UserId), a.Statement, a.ApprovedAt)).ToArray(),
+            e.SignOffRequestedAt, e.SignOffRequestedBy is { } by ? names.GetValueOrDefault(by, by) : null, e.SignOffRequestNote, e.Version);
     }
 }
