@@ -24,6 +24,7 @@ public sealed record ApprovalView(string Approver, string Statement, DateTimeOff
 /// <param name="RequestedBy">Who asked.</param>
 /// <param name="RequestNote">What they told the approvers.</param>
 /// <param name="Version">The evaluation's version, for the next change.</param>
+/// <param name="YouApproved">True when the caller has approved.</param>
 public sealed record SignOffState(
     EvaluationStage Stage, int Required, DateTimeOffset? SignedOffAt, IReadOnlyList<ApprovalView> Approvals,
-    DateTimeOffset? RequestedAt, string? RequestedBy, string? RequestNote, long Version);
+    DateTimeOffset? RequestedAt, string? RequestedBy, string? RequestNote, long Version, bool YouApproved);

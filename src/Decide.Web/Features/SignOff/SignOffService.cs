@@ -199,13 +199,14 @@ public sealed class SignOffService(
             return await db.SaveChangesAsync(ct);
         }, ct);
 
-    private static async Task<SignOffState> StateAsync(DecideDbContext db, StoredEvaluation e, CancellationToken ct)
+    private async Task<SignOffState> StateAsync(DecideDbContext db, StoredEvaluation e, CancellationToken ct)
     {
         var approvals = await db.Approvals.AsNoTracking().Where(a => a.EvaluationId == e.Id).OrderBy(a => a.Id).ToListAsync(ct);
         var ids = approvals.Select(a => a.UserId).Append(e.SignOffRequestedBy ?? "").ToArray();
         var names = await db.Users.AsNoTracking().Where(u => ids.Contains(u.Id)).ToDictionaryAsync(u => u.Id, u => u.DisplayName, ct);
         return new SignOffState(e.Stage, e.RequiredApprovals, e.SignedOffAt,
             approvals.Select(a => new ApprovalView(names.GetValueOrDefault(a.UserId, a.UserId), a.Statement, a.ApprovedAt)).ToArray(),
-            e.SignOffRequestedAt, e.SignOffRequestedBy is { } by ? names.GetValueOrDefault(by, by) : null, e.SignOffRequestNote, e.Version);
+            e.SignOffRequestedAt, e.SignOffRequestedBy is { } by ? names.GetValueOrDefault(by, by) : null, e.SignOffRequestNote, e.Version,
+            approvals.Any(a => a.UserId == user.Id));
     }
 }
