@@ -34,5 +34,20 @@ status=0
 dotnet test Decide.sln -c Release --no-build -nologo \
   --logger "trx" --logger "console;verbosity=minimal" --results-directory "$results" || status=$?
 
+# The data and service tests again, against PostgreSQL (a throwaway local cluster unless DECIDE_TEST_POSTGRES is set).
+# shellcheck source=scripts/postgres.sh
+source scripts/postgres.sh
+if start_test_postgres; then
+  trap stop_test_postgres EXIT
+  dotnet test tests/Decide.Web.Tests -c Release --no-build -nologo \
+    --logger "trx;LogFilePrefix=postgres" --logger "console;verbosity=minimal" --results-directory "$results" || status=$?
+  stop_test_postgres
+  trap - EXIT
+else
+  echo "PostgreSQL could not be started: the PostgreSQL run of the service tests counts as failed."
+  echo '<Counters total="1" executed="1" passed="0" failed="1" />' > "$results/postgres-not-started.trx"
+  status=1
+fi
+
 summary
 exit $status

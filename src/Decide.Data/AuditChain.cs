@@ -59,7 +59,8 @@ public static class AuditChain
         {
             Chain = chain,
             Index = (last?.Index ?? 0) + 1,
-            At = at,
+            // Whole microseconds: the finest time PostgreSQL keeps, so the hashed text reads back identically.
+            At = at.AddTicks(-(at.Ticks % TimeSpan.TicksPerMicrosecond)),
             UserId = userId,
             UserName = userName,
             Action = e.Action,

@@ -121,7 +121,7 @@ internal sealed class ArchivedRecordConfiguration : IEntityTypeConfiguration<Arc
         e.Property(x => x.AlternativeCode).HasMaxLength(100);
         e.Property(x => x.FileName).HasMaxLength(300);
         e.Property(x => x.Content).HasMaxLength(50_000_000);
-        e.Property(x => x.SnapshotJson).HasMaxLength(20_000_000);
+        e.Property(x => x.SnapshotJson).HasMaxLength(10_000_000);
         e.Property(x => x.Sha256).HasMaxLength(64);
         e.Property(x => x.SnapshotSha256).HasMaxLength(64);
         e.Property(x => x.CertificateThumbprint).HasMaxLength(128);

@@ -2,6 +2,7 @@ using Decide.Web.Infrastructure;
 
 var builder = WebApplication.CreateBuilder(args);
 
+builder.AddDecideOperations();
 builder.AddDecideStorage();
 builder.AddDecideIdentity();
 builder.AddDecideApi();
@@ -11,7 +12,9 @@ builder.Services.AddDecideFeatures();
 var app = builder.Build();
 
 await app.PrepareDatabaseAsync();
+app.UseDecideForwardedHeaders();
 app.UseDecidePipeline();
+app.MapDecideOperations();
 app.MapDecideApi();
 app.MapDecideScreens();
 

@@ -104,7 +104,7 @@ namespace Decide.Data.Sqlite.Migrations
 
                     b.Property<string>("SnapshotJson")
                         .IsRequired()
-                        .HasMaxLength(20000000)
+                        .HasMaxLength(10000000)
                         .HasColumnType("TEXT");
 
                     b.Property<string>("SnapshotSha256")

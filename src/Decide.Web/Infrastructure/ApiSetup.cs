@@ -82,7 +82,6 @@ public static class ApiSetup
     public static WebApplication MapDecideApi(this WebApplication app)
     {
         app.MapOpenApi("/openapi/{documentName}.json");
-        app.MapGet("/health/live", () => TypedResults.Ok(new { status = "live" })).ExcludeFromDescription();
         var api = app.MapGroup("/api");
         api.MapAccountEndpoints();
         api.MapEvaluationEndpoints();

@@ -10,8 +10,12 @@ public sealed class DatabaseOptions
 {
     public const string Section = "Database";
 
-    /// <summary><c>Sqlite</c> (default).</summary>
+    /// <summary><c>Sqlite</c> (default: one file, one machine) or <c>Postgres</c> (a shared database for several instances).</summary>
     public string Provider { get; set; } = "Sqlite";
+
+    /// <summary>True when <see cref="Provider"/> names PostgreSQL.</summary>
+    public bool UsesPostgres => string.Equals(Provider, "Postgres", StringComparison.OrdinalIgnoreCase)
+        || string.Equals(Provider, "PostgreSQL", StringComparison.OrdinalIgnoreCase);
 
     /// <summary>Folder for the SQLite file when no connection string is given; relative to the content root.</summary>
     public string DataFolder { get; set; } = "data";
@@ -30,20 +34,33 @@ public static class StorageSetup
         builder.Services.AddSingleton(TimeProvider.System);
 
         var connectionString = builder.Configuration.GetConnectionString("Decide");
-        if (!string.Equals(options.Provider, "Sqlite", StringComparison.OrdinalIgnoreCase))
+        if (options.UsesPostgres)
         {
-            throw new InvalidOperationException($"Database:Provider '{options.Provider}' is not supported; use Sqlite.");
-        }
+            if (string.IsNullOrWhiteSpace(connectionString))
+            {
+                throw new InvalidOperationException(
+                    "Database:Provider is Postgres but ConnectionStrings:Decide is empty; set it (e.g. the environment variable ConnectionStrings__Decide).");
+            }
 
-        if (string.IsNullOrWhiteSpace(connectionString))
+            builder.Services.AddDbContextFactory<DecideDbContext>(db => db.UseNpgsql(
+                connectionString, pg => pg.MigrationsAssembly("Decide.Data.Postgres").EnableRetryOnFailure()));
+        }
+        else if (string.Equals(options.Provider, "Sqlite", StringComparison.OrdinalIgnoreCase))
         {
-            var folder = Path.GetFullPath(options.DataFolder, builder.Environment.ContentRootPath);
-            Directory.CreateDirectory(folder);
-            connectionString = $"Data Source={Path.Combine(folder, "decide.db")}";
-        }
+            if (string.IsNullOrWhiteSpace(connectionString))
+            {
+                var folder = Path.GetFullPath(options.DataFolder, builder.Environment.ContentRootPath);
+                Directory.CreateDirectory(folder);
+                connectionString = $"Data Source={Path.Combine(folder, "decide.db")}";
+            }
 
-        builder.Services.AddDbContextFactory<DecideDbContext>(db => db.UseSqlite(
-            connectionString, sqlite => sqlite.MigrationsAssembly("Decide.Data.Sqlite")));
+            builder.Services.AddDbContextFactory<DecideDbContext>(db => db.UseSqlite(
+                connectionString, sqlite => sqlite.MigrationsAssembly("Decide.Data.Sqlite")));
+        }
+        else
+        {
+            throw new InvalidOperationException($"Database:Provider '{options.Provider}' is not supported; use Sqlite or Postgres.");
+        }
 
         // The keys that protect cookies and antiforgery tokens live in the database, so that every instance of the
         // service accepts what any other issued, and a restart does not sign everyone out.

@@ -1,5 +1,4 @@
 using Decide.Data;
-using Microsoft.Data.Sqlite;
 using Microsoft.EntityFrameworkCore;
 
 namespace Decide.Web.Infrastructure;
@@ -22,15 +21,10 @@ public static class UnitOfWork
             {
                 return await work(db);
             }
-            catch (DbUpdateException e) when (attempt < Attempts && IsAuditCollision(e))
+            catch (DbUpdateException e) when (attempt < Attempts && StoreErrors.IsAuditCollision(e))
             {
                 await Task.Delay(Random.Shared.Next(5, 20 * attempt), ct);
             }
         }
     }
-
-    private static bool IsAuditCollision(DbUpdateException e) =>
-        e is not DbUpdateConcurrencyException
-        && (e.InnerException?.Message.Contains("audit_entries", StringComparison.OrdinalIgnoreCase) == true
-            || (e.InnerException is SqliteException { SqliteErrorCode: 19 } s && s.Message.Contains("audit_entries", StringComparison.OrdinalIgnoreCase)));
 }

@@ -4,12 +4,15 @@ using Decide.Web.Features.Accounts;
 using Microsoft.AspNetCore.Hosting;
 using Microsoft.AspNetCore.Mvc.Testing;
 using Microsoft.Data.Sqlite;
+using Npgsql;
 
 namespace Decide.Web.Tests.Support;
 
 /// <summary>
-/// Hosts the whole service in memory against a real SQLite file of its own (migrated and seeded with the demo at
-/// start), and signs demo users in.
+/// Hosts the whole service in memory against a database of its own (migrated and seeded with the demo at start),
+/// and signs demo users in. The database is a SQLite file, or, when the environment variable
+/// <c>DECIDE_TEST_POSTGRES</c> holds a PostgreSQL connection string (the test script starts a throwaway cluster and
+/// runs these tests a second time with it), a fresh PostgreSQL database dropped afterwards.
 /// </summary>
 public sealed class DecideWebFactory : WebApplicationFactory<Program>
 {
@@ -24,14 +27,28 @@ public sealed class DecideWebFactory : WebApplicationFactory<Program>
     public const string OtherAssessor = "fenwright@" + DemoSeeder.Domain;
     public const string PriceEvaluator = "kilbane@" + DemoSeeder.Domain;
 
-    public string DatabaseFile => Path.Combine(_folder, "decide.db");
+    /// <summary>The PostgreSQL server to test against, if any (connection string without a database).</summary>
+    public static string? PostgresServer => Environment.GetEnvironmentVariable("DECIDE_TEST_POSTGRES") is { Length: > 0 } s ? s : null;
+
+    private readonly string _postgresDatabase = "decide_test_" + Guid.NewGuid().ToString("N");
+
+    /// <summary>"Sqlite" or "Postgres": the provider these tests run against.</summary>
+    public static string Provider => PostgresServer is null ? "Sqlite" : "Postgres";
 
     protected override void ConfigureWebHost(IWebHostBuilder builder)
     {
         Directory.CreateDirectory(_folder);
         builder.UseEnvironment("Testing");
-        builder.UseSetting("Database:DataFolder", _folder);
         builder.UseSetting("Database:SeedDemo", "true");
+        if (PostgresServer is { } server)
+        {
+            builder.UseSetting("Database:Provider", "Postgres");
+            builder.UseSetting("ConnectionStrings:Decide", new NpgsqlConnectionStringBuilder(server) { Database = _postgresDatabase }.ConnectionString);
+        }
+        else
+        {
+            builder.UseSetting("Database:DataFolder", _folder);
+        }
     }
 
     /// <summary>A client signed in as <paramref name="email"/> with a bearer token.</summary>
@@ -57,6 +74,11 @@ public sealed class DecideWebFactory : WebApplicationFactory<Program>
     {
         base.Dispose(disposing);
         SqliteConnection.ClearAllPools();
+        if (PostgresServer is { } server)
+        {
+            DropPostgresDatabase(server);
+        }
+
         try
         {
             Directory.Delete(_folder, recursive: true);
@@ -65,6 +87,28 @@ public sealed class DecideWebFactory : WebApplicationFactory<Program>
         {
             // A file still held open by the OS; the temp folder is cleaned later.
         }
+    }
+
+    /// <summary>Removes the database under the running service (the SQLite file, or the PostgreSQL database).</summary>
+    public void TakeDatabaseAway()
+    {
+        if (PostgresServer is { } server)
+        {
+            DropPostgresDatabase(server);
+            return;
+        }
+
+        SqliteConnection.ClearAllPools();
+        File.Delete(Path.Combine(_folder, "decide.db"));
+    }
+
+    private void DropPostgresDatabase(string server)
+    {
+        NpgsqlConnection.ClearAllPools();
+        using var connection = new NpgsqlConnection(new NpgsqlConnectionStringBuilder(server) { Database = "postgres" }.ConnectionString);
+        connection.Open();
+        using var drop = new NpgsqlCommand($"DROP DATABASE IF EXISTS \"{_postgresDatabase}\" WITH (FORCE)", connection);
+        drop.ExecuteNonQuery();
     }
 
     private sealed record TokenResponse(string AccessToken);

@@ -2,7 +2,6 @@ using Decide.Core.Model;
 using Decide.Data;
 using Decide.Data.Entities;
 using Decide.Web.Infrastructure;
-using Microsoft.Data.Sqlite;
 using Microsoft.EntityFrameworkCore;
 
 namespace Decide.Web.Features.Inputs;
@@ -54,8 +53,7 @@ internal static class InputStore
         {
             throw DomainProblem.Concurrency(what, await current());
         }
-        catch (DbUpdateException e) when (e.InnerException is SqliteException { SqliteErrorCode: 19 } s
-                                           && !s.Message.Contains("audit_entries", StringComparison.OrdinalIgnoreCase))
+        catch (DbUpdateException e) when (StoreErrors.IsUniqueViolation(e) && !StoreErrors.IsAuditCollision(e))
         {
             throw DomainProblem.Concurrency(what, await current());
         }

@@ -56,7 +56,7 @@ namespace Decide.Data.Sqlite.Migrations
                     FileName = table.Column<string>(type: "TEXT", maxLength: 300, nullable: false),
                     Content = table.Column<byte[]>(type: "BLOB", maxLength: 50000000, nullable: false),
                     Sha256 = table.Column<string>(type: "TEXT", maxLength: 64, nullable: false),
-                    SnapshotJson = table.Column<string>(type: "TEXT", maxLength: 20000000, nullable: false),
+                    SnapshotJson = table.Column<string>(type: "TEXT", maxLength: 10000000, nullable: false),
                     SnapshotSha256 = table.Column<string>(type: "TEXT", maxLength: 64, nullable: false),
                     CertificateThumbprint = table.Column<string>(type: "TEXT", maxLength: 128, nullable: false),
                     SelfSigned = table.Column<bool>(type: "INTEGER", nullable: false),

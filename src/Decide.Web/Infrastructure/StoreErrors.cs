@@ -1,0 +1,23 @@
+using Microsoft.Data.Sqlite;
+using Microsoft.EntityFrameworkCore;
+using Npgsql;
+
+namespace Decide.Web.Infrastructure;
+
+/// <summary>What a failed save means, the same way on SQLite and PostgreSQL.</summary>
+public static class StoreErrors
+{
+    /// <summary>True when the save broke a unique index (someone else created the same row first).</summary>
+    public static bool IsUniqueViolation(DbUpdateException e) => e.InnerException switch
+    {
+        SqliteException s => s.SqliteErrorCode == 19,
+        PostgresException p => p.SqlState == PostgresErrorCodes.UniqueViolation,
+        _ => false,
+    };
+
+    /// <summary>True when the unique index broken is the audit chain's: another writer took the same position.</summary>
+    public static bool IsAuditCollision(DbUpdateException e) =>
+        e is not DbUpdateConcurrencyException && IsUniqueViolation(e)
+        && (e.InnerException?.Message.Contains("audit_entries", StringComparison.OrdinalIgnoreCase) == true
+            || (e.InnerException as PostgresException)?.TableName == "audit_entries");
+}
