@@ -10,7 +10,9 @@ namespace Decide.Web.Infrastructure;
 /// </summary>
 public static class UnitOfWork
 {
-    private const int Attempts = 8;
+    // Many writers on one evaluation (a whole panel saving at once, through several instances) collide on the audit
+    // chain's next position; each retry waits a little longer, with jitter so that the colliders spread out.
+    private const int Attempts = 40;
 
     public static async Task<T> RunAsync<T>(IDbContextFactory<DecideDbContext> factory, Func<DecideDbContext, Task<T>> work, CancellationToken ct = default)
     {
@@ -23,7 +25,7 @@ public static class UnitOfWork
             }
             catch (DbUpdateException e) when (attempt < Attempts && StoreErrors.IsAuditCollision(e))
             {
-                await Task.Delay(Random.Shared.Next(5, 20 * attempt), ct);
+                await Task.Delay(Random.Shared.Next(2, 10 + 10 * Math.Min(attempt, 15)), ct);
             }
         }
     }

@@ -31,6 +31,26 @@ public sealed class DecideWebFactory : WebApplicationFactory<Program>
     public static string? PostgresServer => Environment.GetEnvironmentVariable("DECIDE_TEST_POSTGRES") is { Length: > 0 } s ? s : null;
 
     private readonly string _postgresDatabase = "decide_test_" + Guid.NewGuid().ToString("N");
+    private readonly bool _seedDemo = true;
+    private readonly bool _dropsDatabase = true;
+
+    /// <summary>A service of its own with its own database (the usual test fixture).</summary>
+    public DecideWebFactory()
+    {
+    }
+
+    /// <summary>
+    /// One instance of several sharing the PostgreSQL database <paramref name="sharedDatabase"/>, served by Kestrel on
+    /// a loopback port. Only the first instance seeds the demo; the owner drops the database.
+    /// </summary>
+    public DecideWebFactory(string sharedDatabase, bool first)
+    {
+        _postgresDatabase = sharedDatabase;
+        _seedDemo = first;
+        _dropsDatabase = first;
+        UseKestrel(o => o.Listen(System.Net.IPAddress.Loopback, 0));
+        StartServer();
+    }
 
     /// <summary>"Sqlite" or "Postgres": the provider these tests run against.</summary>
     public static string Provider => PostgresServer is null ? "Sqlite" : "Postgres";
@@ -39,7 +59,7 @@ public sealed class DecideWebFactory : WebApplicationFactory<Program>
     {
         Directory.CreateDirectory(_folder);
         builder.UseEnvironment("Testing");
-        builder.UseSetting("Database:SeedDemo", "true");
+        builder.UseSetting("Database:SeedDemo", _seedDemo ? "true" : "false");
         if (PostgresServer is { } server)
         {
             builder.UseSetting("Database:Provider", "Postgres");
@@ -74,7 +94,7 @@ public sealed class DecideWebFactory : WebApplicationFactory<Program>
     {
         base.Dispose(disposing);
         SqliteConnection.ClearAllPools();
-        if (PostgresServer is { } server)
+        if (PostgresServer is { } server && _dropsDatabase)
         {
             DropPostgresDatabase(server);
         }
