@@ -126,7 +126,7 @@ public partial class SetupPage
 
     private string StepState(int step) => step switch
     {
-        1 => $"{_draft!.Criteria.Count} criteria" + (PlanUnsaved ? " · not saved" : ""),
+        1 => $"{_draft!.Criteria.Count} criteria",
         BidsStep => $"{_bids.Count} {Noun}" + (BidsUnsaved ? " · not saved" : ""),
         PanelStep => $"{_seats.Count(s => s.Role == PanelRole.Assessor)} assessor(s)" + (PanelUnsaved ? " · not saved" : ""),
         ReviewStepIndex => TradeWords.Stage(_detail!.Summary.Stage),
@@ -138,9 +138,6 @@ public partial class SetupPage
         BidsStep => BidsEditable,
         _ => PlanEditable,
     };
-
-    private Task<IEnumerable<string>> SearchNouns(string? typed, CancellationToken ct) =>
-        Task.FromResult(PlanDraft.Nouns.Where(n => string.IsNullOrWhiteSpace(typed) || n.Contains(typed.Trim(), StringComparison.OrdinalIgnoreCase)));
 
     private async Task SaveAsync(bool advance)
     {
