@@ -492,9 +492,10 @@ public sealed class EvaluationService(
             }
             else if (!judges.Contains(seat.AssessorCode!))
             {
+                var others = judges.Count > 0 ? "; the panel's weights will come from the others" : "";
                 warnings.Add(seat.DeclarationSignedAt is null
-                    ? $"Assessor {seat.AssessorCode} has not signed the declaration yet, so has given no weights; the panel's weights will come from the others."
-                    : $"Assessor {seat.AssessorCode} has given no weights; the panel's weights will come from the others.");
+                    ? $"Assessor {seat.AssessorCode} has not signed the declaration yet, so has given no weights{others}."
+                    : $"Assessor {seat.AssessorCode} has given no weights{others}.");
             }
         }
 
