@@ -41,6 +41,11 @@ public sealed partial class SetupPage(IPage page) : Screen(page)
 
     public ILocator OpenConfirmation => Page.GetByTestId("open-confirmation");
 
+    /// <summary>A save goes through the service and the audit chain: on a busy machine it may take longer than Playwright's 5 s default.</summary>
+    private static readonly LocatorAssertionsToContainTextOptions Saving = new() { Timeout = 30_000 };
+
+    private static readonly LocatorAssertionsToBeVisibleOptions Shown = new() { Timeout = 30_000 };
+
     private ILocator Button(string name) => Page.GetByRole(AriaRole.Button, new() { Name = name, Exact = true });
 
     /// <summary>As an administrator on the evaluations list: opens "New evaluation", fills the dialog and creates it.</summary>
@@ -74,7 +79,7 @@ public sealed partial class SetupPage(IPage page) : Screen(page)
     public async Task SaveAndContinueAsync(string saved = "saved")
     {
         await Button("Save and continue").ClickAsync();
-        await Assertions.Expect(Status).ToContainTextAsync(saved);
+        await Assertions.Expect(Status).ToContainTextAsync(saved, Saving);
     }
 
     public async Task FillPurposeAsync(string purpose, string noun)
@@ -147,14 +152,14 @@ public sealed partial class SetupPage(IPage page) : Screen(page)
     public async Task AskToLockAsync()
     {
         await Button("Review and lock the plan…").ClickAsync();
-        await Assertions.Expect(LockConfirmation).ToBeVisibleAsync();
+        await Assertions.Expect(LockConfirmation).ToBeVisibleAsync(Shown);
     }
 
     /// <summary>Confirms the lock and waits for the plan's fingerprint.</summary>
     public async Task ConfirmLockAsync()
     {
         await LockConfirmation.GetByRole(AriaRole.Button, new() { Name = "Lock the plan" }).ClickAsync();
-        await Assertions.Expect(PlanHash).ToBeVisibleAsync();
+        await Assertions.Expect(PlanHash).ToBeVisibleAsync(Shown);
     }
 
     public async Task CancelLockAsync() => await LockConfirmation.GetByRole(AriaRole.Button, new() { Name = "Not yet" }).ClickAsync();
@@ -168,7 +173,7 @@ public sealed partial class SetupPage(IPage page) : Screen(page)
     public async Task ConfirmOpenScoringAsync()
     {
         await OpenConfirmation.GetByRole(AriaRole.Button, new() { Name = "Open scoring" }).ClickAsync();
-        await Assertions.Expect(Status).ToContainTextAsync("Scoring is open");
+        await Assertions.Expect(Status).ToContainTextAsync("Scoring is open", Saving);
     }
 
     [GeneratedRegex("/evaluations/([0-9a-f-]{36})")]
