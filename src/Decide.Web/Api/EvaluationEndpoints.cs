@@ -12,6 +12,7 @@ public static class EvaluationEndpoints
         group.MapGet("/", List).WithSummary("Evaluations the caller takes part in (all, for an administrator).");
         group.MapPost("/", Create).WithSummary("Create an evaluation and name its facilitator (administrator).");
         group.MapGet("/{id:guid}", Get).WithSummary("One evaluation as the caller may see it.");
+        group.MapGet("/{id:guid}/setup", Setup).WithSummary("The seats with e-mail addresses and what stops the plan from being locked (facilitator).");
         group.MapPut("/{id:guid}/plan", UpdatePlan).WithSummary("Replace the plan (facilitator, setup only).");
         group.MapPut("/{id:guid}/panel", UpdatePanel).WithSummary("Replace the panel's seats (facilitator, setup only).");
         group.MapPut("/{id:guid}/alternatives", UpdateAlternatives).WithSummary("Replace the list of bids (facilitator, before scoring).");
@@ -34,6 +35,9 @@ public static class EvaluationEndpoints
 
     private static async Task<Ok<EvaluationDetail>> Get(Guid id, EvaluationService service, CancellationToken ct) =>
         TypedResults.Ok(await service.GetAsync(id, ct));
+
+    private static async Task<Ok<SetupView>> Setup(Guid id, EvaluationService service, CancellationToken ct) =>
+        TypedResults.Ok(await service.GetSetupAsync(id, ct));
 
     private static async Task<Ok<EvaluationSummary>> UpdatePlan(Guid id, UpdatePlanRequest request, EvaluationService service, CancellationToken ct) =>
         TypedResults.Ok(await service.UpdatePlanAsync(id, request, ct));

@@ -37,6 +37,7 @@ public sealed class AuthorisationMatrixTests(AuthorisationFixture fixture) : ICl
         ["GET /api/evaluations/"] = "1AAAAAAA",
         ["POST /api/evaluations/"] = "1333333A",
         ["GET /api/evaluations/{id:guid}"] = "14AAAAAA",
+        ["GET /api/evaluations/{id:guid}/setup"] = "1433A333",
         ["PUT /api/evaluations/{id:guid}/plan"] = "1433A333",
         ["PUT /api/evaluations/{id:guid}/panel"] = "1433A333",
         ["PUT /api/evaluations/{id:guid}/alternatives"] = "1433A333",

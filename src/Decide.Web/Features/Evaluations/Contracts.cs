@@ -63,3 +63,11 @@ public sealed record LegalHoldRequest(bool Hold, string Reason);
 
 /// <summary>The outcome of a stage change, with anything the facilitator should know.</summary>
 public sealed record TransitionResult(EvaluationSummary Evaluation, IReadOnlyList<string> Warnings);
+
+/// <summary>The facilitator's view for setting up: the seats as they are edited, and whether the plan can be locked now.</summary>
+/// <param name="Seats">Every seat but the facilitators', with the account's e-mail address.</param>
+/// <param name="Readiness">At setup, what stops the lock and what to know before it; null at every other stage.</param>
+public sealed record SetupView(IReadOnlyList<SeatRequest> Seats, LockReadiness? Readiness);
+
+/// <summary>What stops the plan from being locked (<paramref name="Blocking"/>), and what the facilitator should know (<paramref name="Warnings"/>).</summary>
+public sealed record LockReadiness(IReadOnlyList<string> Blocking, IReadOnlyList<string> Warnings);

@@ -120,6 +120,24 @@ public sealed class EvaluationService(
             e.PreviousRevisionId, e.RevisionReason, e.SupersededById, e.LegalHold);
     }
 
+    /// <summary>
+    /// What the facilitator's setup screen needs beyond <see cref="GetAsync"/>: the seats with their e-mail addresses
+    /// (to edit the panel) and, at setup, what stops the plan from being locked and what the facilitator should know.
+    /// </summary>
+    public async Task<SetupView> GetSetupAsync(Guid id, CancellationToken ct = default)
+    {
+        await using var db = await factory.CreateDbContextAsync(ct);
+        var m = await access.LoadAsync(db, id, ct);
+        m.Require(PanelRole.Facilitator);
+        var e = m.Evaluation;
+        var userIds = e.Panel.Select(p => p.UserId).ToArray();
+        var emails = await db.Users.AsNoTracking().Where(u => userIds.Contains(u.Id)).ToDictionaryAsync(u => u.Id, u => u.Email ?? "", ct);
+        var seats = e.Panel.Where(p => p.Role != PanelRole.Facilitator).OrderBy(p => p.Id).Select(p => new SeatRequest(
+            emails.GetValueOrDefault(p.UserId, ""), p.Role, p.AssessorCode,
+            p.Role is PanelRole.Assessor or PanelRole.PriceEvaluator ? p.Weight : null, EvaluationComposer.Assigned(p))).ToArray();
+        return new SetupView(seats, e.Stage == EvaluationStage.Setup ? await ReadinessAsync(db, e, ct) : null);
+    }
+
     public Task<EvaluationSummary> UpdatePlanAsync(Guid id, UpdatePlanRequest request, CancellationToken ct = default) =>
         UnitOfWork.RunAsync(factory, async db =>
         {
@@ -443,6 +461,49 @@ public sealed class EvaluationService(
             await SaveAsync(db, m.Evaluation, ct);
             return Summarise(m.Evaluation, m.Roles);
         }, ct);
+
+    /// <summary>The checks <see cref="LockPlanAsync"/> makes, as sentences, plus what the facilitator should know before locking.</summary>
+    private async Task<LockReadiness> ReadinessAsync(DecideDbContext db, StoredEvaluation e, CancellationToken ct)
+    {
+        var blocking = new List<string>();
+        var warnings = new List<string>();
+        EvaluationFile file;
+        try
+        {
+            file = await composer.ComposeAsync(db, e, ct);
+        }
+        catch (InvalidEvaluationException problem)
+        {
+            return new LockReadiness(problem.Errors.Select(x => $"{x.Path}: {x.Reason}").ToArray(), []);
+        }
+
+        var assessors = e.Panel.Where(p => p.Role == PanelRole.Assessor && p.AssessorCode is not null).OrderBy(p => p.Id).ToArray();
+        if (assessors.Length == 0)
+        {
+            blocking.Add("The panel has no assessor yet: seat at least one under Panel.");
+        }
+
+        var judges = file.Evaluation.Importance.Select(r => r.Assessor).Concat(file.Evaluation.Pairwise.Select(p => p.Assessor)).ToHashSet(StringComparer.Ordinal);
+        foreach (var seat in assessors)
+        {
+            if (judges.Contains(seat.AssessorCode!) && seat.WeightsSubmittedAt is null)
+            {
+                blocking.Add($"Assessor {seat.AssessorCode} has weight judgements that are not submitted yet: they submit them, or clear them, before the plan is locked.");
+            }
+            else if (!judges.Contains(seat.AssessorCode!))
+            {
+                var others = judges.Count > 0 ? "; the panel's weights will come from the others" : "";
+                warnings.Add(seat.DeclarationSignedAt is null
+                    ? $"Assessor {seat.AssessorCode} has not signed the declaration yet, so has given no weights{others}."
+                    : $"Assessor {seat.AssessorCode} has given no weights{others}.");
+            }
+        }
+
+        blocking.AddRange(EvaluationValidator.Validate(file.Evaluation)
+            .Where(x => InScope(x.Path, [.. PlanPaths, "$.assessors", "$.importance", "$.pairwise"]))
+            .Select(x => $"{x.Path}: {x.Reason}"));
+        return new LockReadiness(blocking, warnings);
+    }
 
     internal static EvaluationSummary Summarise(StoredEvaluation e, IEnumerable<PanelRole> roles) =>
         new(e.Id, e.Reference, e.Title, e.Organisation, e.Stage, e.Revision, roles.Distinct().Order().ToArray(), e.Version);
