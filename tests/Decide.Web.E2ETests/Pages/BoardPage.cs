@@ -54,7 +54,7 @@ public sealed class BoardPage(IPage page) : Screen(page)
             flagged,
             (await row.Locator("td[data-column=ratings] .decide-num").InnerTextAsync()).Trim(),
             await Column(row, "sheet"),
-            await row.GetByRole(AriaRole.Button, new() { Name = $"Reopen the sheet of {assessor}" }).CountAsync() > 0);
+            await row.GetByRole(AriaRole.Button, new() { Name = $"Reopen sheet of {assessor}" }).CountAsync() > 0);
     }
 
     /// <summary>Opens the confirmation of starting moderation (the caller reads it or confirms it).</summary>
@@ -76,7 +76,7 @@ public sealed class BoardPage(IPage page) : Screen(page)
     public async Task ReopenSheetAsync(string assessor, string reason)
     {
         await WaitUntilInteractiveAsync();
-        await Row(assessor).GetByRole(AriaRole.Button, new() { Name = $"Reopen the sheet of {assessor}" }).ClickAsync();
+        await Row(assessor).GetByRole(AriaRole.Button, new() { Name = $"Reopen sheet of {assessor}" }).ClickAsync();
         var panel = Page.Locator("[data-testid=reopen-panel]");
         await panel.GetByLabel("Reason for reopening").FillAsync(reason);
         await panel.GetByRole(AriaRole.Button, new() { Name = "Reopen the sheet" }).ClickAsync();

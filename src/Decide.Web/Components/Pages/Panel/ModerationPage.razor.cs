@@ -70,6 +70,9 @@ public partial class ModerationPage
             .DistinctBy(p => p.AssessorCode).ToDictionary(p => p.AssessorCode!, p => p.DisplayName, StringComparer.Ordinal);
         await ReloadAsync();
         _terms = Terms(_board?.RatingScale ?? []);
+
+        // The discussion starts with the flagged cells; every cell is one tick away.
+        _filter = new ModerationFilter(FlaggedOnly: _board?.Flagged > 0);
     }
 
     private async Task ReloadAsync() =>
