@@ -100,4 +100,57 @@ public sealed class ModerationJourneyTests(BrowserSite site) : IClassFixture<Bro
         await Evidence.AssertAccessibleAsync(page, "the scoring board on a tablet");
         watch.AssertClean();
     }
+
+    [Fact]
+    public async Task In_scoring_the_facilitator_records_a_failed_gate_with_its_note_and_starts_moderation_once_every_sheet_is_in()
+    {
+        var copies = new ScoringCopy(site.Server);
+        var id = await copies.CreateAsync();
+        var (context, page, watch) = await site.OpenAsync();
+        await using var _ = context;
+
+        await page.GotoAsync($"/signin?returnUrl=%2Fevaluations%2F{id}%2Fvalues");
+        await new SignInPage(page).SignInAsync(DecideServer.Facilitator, DecideServer.Password);
+
+        // Gates are the facilitator's while scoring runs: a fail without a note is held back, with the reason beside it.
+        var values = new ValuesPage(page);
+        await Assertions.Expect(values.Title).ToBeVisibleAsync();
+        await Assertions.Expect(values.GatesReadOnly).ToHaveCountAsync(0);
+        await Assertions.Expect(values.ValuesReadOnly).ToContainTextAsync("price evaluator");
+        await values.RecordGateAsync("vardelle", "ingress", passed: false, note: null);
+        await Assertions.Expect(values.Gate("vardelle", "ingress")).ToContainTextAsync("A fail needs a note");
+        await values.RecordGateAsync("vardelle", "ingress", passed: false, note: "The IK10 certificate covers a different enclosure from the one offered.");
+        await Assertions.Expect(ValuesPage.State(values.Gate("vardelle", "ingress"))).ToHaveTextAsync("Saved");
+        await Evidence.ScreenshotAsync(page, "26-gates-in-scoring");
+        await Evidence.AssertAccessibleAsync(page, "values and gates in scoring");
+        await values.RecordGateAsync("vardelle", "ingress", passed: true, note: null);
+        await Assertions.Expect(ValuesPage.State(values.Gate("vardelle", "ingress"))).ToHaveTextAsync("Saved");
+
+        // No sheet is submitted yet: the confirmation names them and will not start moderation.
+        var overview = new OverviewPage(page);
+        await overview.OpenTabAsync("Scoring board");
+        var board = new BoardPage(page);
+        await Assertions.Expect(board.Title).ToBeVisibleAsync();
+        Assert.Equal("open", (await board.ReadRowAsync("ravelle")).Sheet);
+        await board.OpenStartModerationAsync();
+        await Assertions.Expect(board.Unsubmitted).ToContainTextAsync("ravelle");
+        await Assertions.Expect(board.ConfirmStart).ToBeDisabledAsync();
+        await Evidence.ScreenshotAsync(page, "27-start-moderation-held-back");
+        await Evidence.AssertAccessibleAsync(page, "the scoring board in scoring");
+
+        // Every assessor submits; the board read afresh lets moderation start, and the sheets can then be reopened.
+        await copies.SubmitEverySheetAsync(id);
+        await page.ReloadAsync();
+        await Assertions.Expect(board.Title).ToBeVisibleAsync();
+        await board.StartModerationAsync();
+        await Assertions.Expect(board.Notice).ToContainTextAsync("Moderation has started");
+        await Assertions.Expect(page.GetByRole(AriaRole.Navigation, new() { Name = "This evaluation" }).GetByRole(AriaRole.Link, new() { Name = "Moderation" }))
+            .ToBeVisibleAsync();
+        await Assertions.Expect(board.SpreadGrid).ToBeVisibleAsync();
+        await board.ReopenSheetAsync("fenwright", "Fenwright asked to correct a rating entered against the wrong bid.");
+        await Assertions.Expect(board.Notice).ToContainTextAsync("The sheet of fenwright is open again");
+        Assert.Equal("open", (await board.ReadRowAsync("fenwright")).Sheet);
+        await Evidence.ScreenshotAsync(page, "28-moderation-started-sheet-reopened");
+        watch.AssertClean();
+    }
 }

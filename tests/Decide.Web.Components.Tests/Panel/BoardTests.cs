@@ -42,7 +42,7 @@ public sealed class BoardTests : MudComponentTest
         var cut = Render<ScoringBoardTable>(p => p.Add(x => x.Board, board).Add(x => x.CanReopen, true).Add(x => x.OnReopen, (string code) => asked = code));
 
         Assert.Equal("12 of 30", cut.Find("tr[data-assessor=kilbane] td[data-column=ratings] .decide-num").TextContent.Trim());
-        Assert.Equal("open", cut.Find("tr[data-assessor=kilbane] td[data-column=sheet]").TextContent.Trim());
+        Assert.Equal("open", cut.Find("tr[data-assessor=kilbane] [data-testid=sheet-state]").TextContent.Trim());
         Assert.Empty(cut.FindAll("tr[data-assessor=kilbane] button"));
         cut.Find("tr[data-assessor=ravelle] button").Click();
         Assert.Equal("ravelle", asked);

@@ -53,7 +53,7 @@ public sealed class BoardPage(IPage page) : Screen(page)
             consistency,
             flagged,
             (await row.Locator("td[data-column=ratings] .decide-num").InnerTextAsync()).Trim(),
-            await Column(row, "sheet"),
+            (await row.Locator("td[data-column=sheet] [data-testid=sheet-state]").InnerTextAsync()).Trim(),
             await row.GetByRole(AriaRole.Button, new() { Name = $"Reopen sheet of {assessor}" }).CountAsync() > 0);
     }
 

@@ -9,7 +9,8 @@ namespace Decide.Web.Components.Pages.Panel;
 /// <param name="Code">Assessor code.</param>
 /// <param name="Name">Display name.</param>
 /// <param name="DeclarationSigned">The declaration of interests is signed.</param>
-/// <param name="Declaration">What the declaration column says.</param>
+/// <param name="Declaration">What the declaration column says ("signed 13 Nov 2026" or "not signed").</param>
+/// <param name="NamesConfirmed">Whether the declaration was confirmed once the bidders' names were known; null while unsigned.</param>
 /// <param name="WeightsDone">The weight judgements are submitted.</param>
 /// <param name="Consistency">What the consistency column says ("—" when the plan weighs by importance).</param>
 /// <param name="ConsistencyFlag">A complete matrix of theirs is above its consistency threshold: ask them to revise.</param>
@@ -19,7 +20,7 @@ namespace Decide.Web.Components.Pages.Panel;
 /// <param name="Sheet">What the sheet column says.</param>
 /// <param name="CanReopen">The facilitator may reopen the sheet now (submitted; scoring or moderation).</param>
 public sealed record BoardRow(
-    string Code, string Name, bool DeclarationSigned, string Declaration, bool WeightsDone, string Consistency, bool ConsistencyFlag,
+    string Code, string Name, bool DeclarationSigned, string Declaration, string? NamesConfirmed, bool WeightsDone, string Consistency, bool ConsistencyFlag,
     int Done, int Total, bool Submitted, string Sheet, bool CanReopen)
 {
     /// <summary>Share of the cells done, 0 to 100 (100 when there is nothing to rate).</summary>
@@ -31,13 +32,11 @@ public sealed record BoardRow(
     /// <summary>The line for <paramref name="p"/> at <paramref name="stage"/>.</summary>
     public static BoardRow From(AssessorProgress p, EvaluationStage stage)
     {
-        var declaration = p.DeclarationSignedAt is { } signed
-            ? p.NamesConfirmedAt is { } confirmed
-                ? $"signed {TradeWords.Date(signed)}; confirmed against the bidders {TradeWords.Date(confirmed)}"
-                : $"signed {TradeWords.Date(signed)}; not yet confirmed against the bidders"
-            : "not signed";
+        var declaration = p.DeclarationSignedAt is { } signed ? $"signed {TradeWords.Date(signed)}" : "not signed";
         return new BoardRow(
-            p.AssessorCode, p.Name, p.DeclarationSignedAt is not null, declaration, p.WeightsSubmittedAt is not null,
+            p.AssessorCode, p.Name, p.DeclarationSignedAt is not null, declaration,
+            p.DeclarationSignedAt is null ? null : p.NamesConfirmedAt is { } confirmed ? $"bidders' names confirmed {TradeWords.Date(confirmed)}" : "bidders' names not yet confirmed",
+            p.WeightsSubmittedAt is not null,
             ConsistencyText(p.Consistency), p.InconsistentMatrices,
             p.RatingsDone, p.RatingsTotal, p.SubmittedAt is not null,
             p.SubmittedAt is { } at ? $"submitted {TradeWords.Date(at)}" : "open",
