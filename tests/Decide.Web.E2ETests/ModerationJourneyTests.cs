@@ -151,6 +151,26 @@ public sealed class ModerationJourneyTests(BrowserSite site) : IClassFixture<Bro
         await Assertions.Expect(board.Notice).ToContainTextAsync("The sheet of fenwright is open again");
         Assert.Equal("open", (await board.ReadRowAsync("fenwright")).Sheet);
         await Evidence.ScreenshotAsync(page, "28-moderation-started-sheet-reopened");
+
+        // Someone else records a value for the cell while the form is open: nothing is overwritten, their value shows,
+        // and recording again replaces it knowingly.
+        await new OverviewPage(page).OpenTabAsync("Moderation");
+        var moderation = new ModerationPage(page);
+        await Assertions.Expect(moderation.Title).ToBeVisibleAsync();
+        var (cell, key) = await moderation.OpenFirstFlaggedCellAsync();
+        var parts = key.Split('/');
+        await cell.GetByRole(AriaRole.Button, new() { Name = "Record a moderated value" }).ClickAsync();
+        await copies.ModerateAsync(id, parts[0], parts[1], "F", "Recorded from another session during the same meeting.", ["ravelle"]);
+        const string reason = "The panel agreed Medium good after reading the bid's section on the feed together.";
+        await cell.Locator("input[type=radio][value='MG']").CheckAsync();
+        await cell.GetByLabel("Reason the panel agreed on it").FillAsync(reason);
+        await cell.GetByRole(AriaRole.Button, new() { Name = "Record the moderated value" }).ClickAsync();
+        await Assertions.Expect(cell.GetByRole(AriaRole.Alert)).ToContainTextAsync("Someone else recorded a moderated value for this cell");
+        await Assertions.Expect(cell.Locator("[data-testid=moderated-term]")).ToHaveTextAsync("F");
+        await Evidence.ScreenshotAsync(page, "29-moderation-conflict");
+        await cell.GetByRole(AriaRole.Button, new() { Name = "Record the moderated value" }).ClickAsync();
+        await Assertions.Expect(moderation.Notice).ToContainTextAsync("Recorded MG");
+        await Assertions.Expect(moderation.RecordRow(parts[0], parts[1])).ToContainTextAsync("replaces 1 earlier");
         watch.AssertClean();
     }
 }

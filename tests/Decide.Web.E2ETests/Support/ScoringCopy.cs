@@ -25,6 +25,9 @@ public sealed class ScoringCopy(DecideServer server)
             .First(e => e.GetProperty("reference").GetString() == DemoReference).GetProperty("id").GetGuid();
         var file = JsonNode.Parse(await facilitator.GetStringAsync($"/api/evaluations/{demo}/export"))!.AsObject();
         file["reference"] = Reference;
+
+        // Scoring comes before moderation: values the demo's panel may have moderated already are not carried over.
+        file.Remove("moderation");
         var codes = file["assessors"]!.AsArray().Select(a => (string)a!["id"]!).ToArray();
 
         Guid id;
@@ -74,6 +77,14 @@ public sealed class ScoringCopy(DecideServer server)
             await OkAsync(await assessor.PostAsJsonAsync($"/api/evaluations/{id}/declaration/names", new { conflicts = Array.Empty<object>() }));
             await OkAsync(await assessor.PostAsJsonAsync($"/api/evaluations/{id}/my/submit", new { }));
         }
+    }
+
+    /// <summary>The facilitator records a moderated value through the API (as another session would), replacing none.</summary>
+    public async Task ModerateAsync(Guid id, string alternative, string criterion, string term, string reason, IReadOnlyList<string> agreedBy)
+    {
+        using var facilitator = await SignInAsync(DecideServer.Facilitator);
+        await OkAsync(await facilitator.PutAsJsonAsync($"/api/evaluations/{id}/moderation/{alternative}/{criterion}",
+            new { term, reason, agreedBy, replaces = (long?)null }));
     }
 
     private async Task<HttpClient> SignInAsync(string email)

@@ -48,7 +48,7 @@ public sealed class ScreenResultsTests(DecideWebFactory factory) : IClassFixture
         var id = await factory.DemoEvaluationAsync();
         using var client = await factory.SignInAsync(DecideWebFactory.Observer);
         var document = JsonDocument.Parse(await client.GetStringAsync($"/api/evaluations/{id}/results?draws=200&seed=9")).RootElement;
-        var summary = document.GetProperty("summary").EnumerateArray().Select(s => s.GetString()).ToArray();
+        var summary = document.GetProperty("summary").EnumerateArray().Select(s => s.GetString() ?? "").ToArray();
 
         await using var scope = await CircuitOfAsync(DecideWebFactory.Observer);
         var results = scope.ServiceProvider.GetRequiredService<ResultsService>();

@@ -25,6 +25,8 @@ public partial class BoardPage
     private bool _confirmingStart;
     private bool _busy;
 
+    private Guid? _shownId;
+
     [Parameter]
     public Guid Id { get; set; }
 
@@ -44,6 +46,13 @@ public partial class BoardPage
 
     protected override async Task OnParametersSetAsync()
     {
+        // The layout may hand the same parameters again (a sign-in check, a re-render above): keep what is on screen.
+        if (Id == _shownId)
+        {
+            return;
+        }
+
+        _shownId = Id;
         _notice = null;
         _actionProblem = null;
         await LoadAsync();

@@ -24,6 +24,8 @@ public partial class ModerationPage
     private IReadOnlyDictionary<string, string> _names = new Dictionary<string, string>();
     private readonly HashSet<string> _open = new(StringComparer.Ordinal);
 
+    private Guid? _shownId;
+
     [Parameter]
     public Guid Id { get; set; }
 
@@ -57,6 +59,13 @@ public partial class ModerationPage
 
     protected override async Task OnParametersSetAsync()
     {
+        // The layout may hand the same parameters again (a sign-in check, a re-render above): keep what is on screen.
+        if (Id == _shownId)
+        {
+            return;
+        }
+
+        _shownId = Id;
         _notice = null;
         _open.Clear();
         _filter = new ModerationFilter();

@@ -24,6 +24,8 @@ public partial class ValuesPage
     private readonly Dictionary<string, SaveState> _states = new(StringComparer.Ordinal);
     private readonly Dictionary<string, string> _refusals = new(StringComparer.Ordinal);
 
+    private Guid? _shownId;
+
     [Parameter]
     public Guid Id { get; set; }
 
@@ -57,6 +59,13 @@ public partial class ValuesPage
 
     protected override async Task OnParametersSetAsync()
     {
+        // The layout may hand the same parameters again (a sign-in check, a re-render above): keep what is on screen.
+        if (Id == _shownId)
+        {
+            return;
+        }
+
+        _shownId = Id;
         _loaded = false;
         _states.Clear();
         _refusals.Clear();
