@@ -1,6 +1,5 @@
 using Decide.Web.Components;
 using Decide.Web.Components.Account;
-using Decide.Web.Components.Pages.Results;
 using Microsoft.AspNetCore.Components.Authorization;
 using Microsoft.AspNetCore.Components.Server.Circuits;
 using MudBlazor;
@@ -26,7 +25,6 @@ public static class ScreensSetup
             o.SnackbarConfiguration.VisibleStateDuration = 8000;
             o.SnackbarConfiguration.PreventDuplicates = true;
         });
-        builder.Services.AddScoped<ResultsCalculator>();
         return builder;
     }
 

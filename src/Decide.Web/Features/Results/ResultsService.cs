@@ -1,3 +1,4 @@
+using Decide.Core.Analysis;
 using Decide.Core.Robustness;
 using Decide.Data;
 using Decide.Data.Entities;
@@ -10,7 +11,8 @@ namespace Decide.Web.Features.Results;
 
 /// <summary>
 /// The evaluation's results with robustness, from what is stored (composed as a portable evaluation), for the panel
-/// from moderation on. Every view is audited with the settings and the SHA-256 of the document shown.
+/// from moderation on. Every view is audited: the API's with the settings and the SHA-256 of the document shown,
+/// a screen's with the ranking shown.
 /// </summary>
 public sealed class ResultsService(
     IDbContextFactory<DecideDbContext> factory,
@@ -20,23 +22,33 @@ public sealed class ResultsService(
 {
     public async Task<ResultsJson> GetAsync(Guid id, RobustnessOptions options, CancellationToken ct = default)
     {
-        Interchange.EvaluationFile file;
-        await using (var db = await factory.CreateDbContextAsync(ct))
-        {
-            var m = await access.LoadAsync(db, id, ct);
-            RequireResultsVisible(m, "see the results");
-            file = await composer.ComposeAsync(db, m.Evaluation, ct);
-        }
-
+        var (_, file) = await ComposeAsync(id, ct);
         var results = ResultsComputation.Run(file, options);
-        await UnitOfWork.RunAsync(factory, async db =>
-        {
-            await audit.RecordAsync(db, id, new AuditEvent("results.viewed", $"evaluations/{id}/results", null,
-                $"draws {options.Draws}, seed {options.Seed}; results sha256 {results.Sha256}"), ct);
-            return await db.SaveChangesAsync(ct);
-        }, ct);
+        await AuditViewAsync(id, $"draws {options.Draws}, seed {options.Seed}; results sha256 {results.Sha256}", ct);
         return results;
     }
+
+    /// <summary>
+    /// The ranking for a screen, computed on a worker thread; the robustness checks follow separately
+    /// (<see cref="CheckRobustnessAsync"/>) so that the ranking can be shown while they run.
+    /// </summary>
+    /// <exception cref="DomainProblem">The reader may not see results, or not yet.</exception>
+    /// <exception cref="Decide.Core.InvalidEvaluationException">The stored evaluation cannot be analysed (every problem listed).</exception>
+    public async Task<RankedEvaluation> RankAsync(Guid id, CancellationToken ct = default)
+    {
+        var (summary, file) = await ComposeAsync(id, ct);
+        var (prepared, analysis) = await Task.Run(() =>
+        {
+            var p = DecisionEngine.Prepare(file.Evaluation);
+            return (p, p.Analyze());
+        }, ct);
+        await AuditViewAsync(id, "ranking " + string.Join(" > ", analysis.Ranking.Select(r => r.Alternative)), ct);
+        return new RankedEvaluation(summary, file, prepared, analysis);
+    }
+
+    /// <summary>The robustness checks (sensitivity, rank acceptability, panel agreement) of a ranking, on a worker thread.</summary>
+    public static Task<RobustnessResult> CheckRobustnessAsync(RankedEvaluation ranked, RobustnessOptions options, CancellationToken ct = default) =>
+        Task.Run(() => RobustnessAnalysis.Run(ranked.Prepared, ranked.Analysis, options), ct);
 
     /// <summary>
     /// Results are visible to the facilitator, the observer, the approver and the assessors once moderation has
@@ -47,4 +59,19 @@ public sealed class ResultsService(
         m.Require(PanelRole.Facilitator, PanelRole.Observer, PanelRole.Approver, PanelRole.Assessor);
         Moderation.ModerationService.RequireModerationReached(m, action);
     }
+
+    private async Task<(EvaluationSummary Summary, Interchange.EvaluationFile File)> ComposeAsync(Guid id, CancellationToken ct)
+    {
+        await using var db = await factory.CreateDbContextAsync(ct);
+        var m = await access.LoadAsync(db, id, ct);
+        RequireResultsVisible(m, "see the results");
+        return (EvaluationService.Summarise(m.Evaluation, m.Roles), await composer.ComposeAsync(db, m.Evaluation, ct));
+    }
+
+    private Task AuditViewAsync(Guid id, string shown, CancellationToken ct) =>
+        UnitOfWork.RunAsync(factory, async db =>
+        {
+            await audit.RecordAsync(db, id, new AuditEvent("results.viewed", $"evaluations/{id}/results", null, shown), ct);
+            return await db.SaveChangesAsync(ct);
+        }, ct);
 }

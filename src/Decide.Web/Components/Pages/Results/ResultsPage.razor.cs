@@ -1,12 +1,13 @@
 using Decide.Core.Robustness;
 using Decide.Web.Components.Shared;
+using Decide.Web.Features.Results;
 using Microsoft.AspNetCore.Components;
 
 namespace Decide.Web.Components.Pages.Results;
 
 /// <summary>
-/// The results of an evaluation in moderation or later, straight from the engine: the ranking first, then the
-/// robustness checks, computed on a worker thread while a progress bar shows. Nothing runs while the screen is
+/// The results of an evaluation in moderation or later, from the same results service as the API: the ranking
+/// first, then the robustness checks, computed on a worker thread while a progress bar shows. Nothing runs while the screen is
 /// prerendered: the engine runs once, when the screen is live.
 /// </summary>
 public partial class ResultsPage : IDisposable
@@ -21,7 +22,7 @@ public partial class ResultsPage : IDisposable
     public Guid Id { get; set; }
 
     [Inject]
-    private ResultsCalculator Calculator { get; set; } = default!;
+    private ResultsService Results { get; set; } = default!;
 
     [Inject]
     private ILogger<ResultsPage> Log { get; set; } = default!;
@@ -38,14 +39,17 @@ public partial class ResultsPage : IDisposable
         var ct = _closing.Token;
         _robustness = null;
         _robustnessProblem = null;
-        (_reading, _problem) = await Attempt.RunAsync(() => Calculator.RankAsync(Id, ct), Log, "ranking an evaluation");
-        if (_reading is null)
+        RankedEvaluation? ranked;
+        (ranked, _problem) = await Attempt.RunAsync(() => Results.RankAsync(Id, ct), Log, "ranking an evaluation");
+        _reading = ranked is null ? null : ResultsReading.Of(ranked);
+        if (ranked is null)
         {
             return;
         }
 
         StateHasChanged();
-        (_robustness, _robustnessProblem) = await Attempt.RunAsync(() => Calculator.CheckRobustnessAsync(_reading, ct), Log, "checking robustness");
+        (_robustness, _robustnessProblem) = await Attempt.RunAsync(
+            () => ResultsService.CheckRobustnessAsync(ranked, new RobustnessOptions(), ct), Log, "checking robustness");
     }
 
     public void Dispose()

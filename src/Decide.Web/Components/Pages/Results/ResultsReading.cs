@@ -1,5 +1,6 @@
 using Decide.Core.Analysis;
 using Decide.Web.Features.Evaluations;
+using Decide.Web.Features.Results;
 
 namespace Decide.Web.Components.Pages.Results;
 
@@ -10,6 +11,10 @@ namespace Decide.Web.Components.Pages.Results;
 /// <param name="Names">Names of the bids, criteria and assessors.</param>
 public sealed record ResultsReading(EvaluationSummary Summary, PreparedEvaluation Prepared, AnalysisResult Analysis, ResultNames Names)
 {
+    /// <summary>What the results service ranked, with the names the screen shows.</summary>
+    public static ResultsReading Of(RankedEvaluation ranked) =>
+        new(ranked.Summary, ranked.Prepared, ranked.Analysis, ResultNames.Of(ranked.File.Evaluation));
+
     /// <summary>The colour of a bid in every chart of the screen, by its place in the ranking.</summary>
     public string Colour(string alternative)
     {

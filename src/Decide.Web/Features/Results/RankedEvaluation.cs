@@ -1,0 +1,12 @@
+using Decide.Core.Analysis;
+using Decide.Interchange;
+using Decide.Web.Features.Evaluations;
+
+namespace Decide.Web.Features.Results;
+
+/// <summary>An evaluation as stored, ranked by the engine: what a results screen shows before the robustness checks.</summary>
+/// <param name="Summary">The evaluation as the reader sees it.</param>
+/// <param name="File">The portable evaluation the engine ranked (names of bids, criteria and assessors).</param>
+/// <param name="Prepared">The compiled evaluation (input to the robustness checks).</param>
+/// <param name="Analysis">Weights, matrix and ranking.</param>
+public sealed record RankedEvaluation(EvaluationSummary Summary, EvaluationFile File, PreparedEvaluation Prepared, AnalysisResult Analysis);
