@@ -107,6 +107,7 @@ public sealed class RatingGridTests : MudComponentTest
     public void Declining_a_cell_sends_the_reason_and_no_term()
     {
         var cut = RenderGrid(Sheet(rated: ("northgate", "staffing", "P", Rationale, 2)));
+        Cell(cut, "northgate/staffing").Focus();
         Cell(cut, "northgate/staffing").KeyDown(new KeyboardEventArgs { Key = "Enter" });
         Button(cut, "Decline this cell instead").Click();
         cut.Find("#decline-reason").Input("Staffing plans are outside my expertise.");

@@ -93,8 +93,9 @@ public partial class PairwiseJudging
 
     private static string Number(double value) => value.ToString(value >= 10 ? "0.#" : "0.##", CultureInfo.InvariantCulture);
 
+    /// <summary>The least consistent judgement of the matrix shown, when it sits at (row, col); the engine lists it first.</summary>
     private JudgementHint? Worst(string row, string col) =>
-        Matrix?.WorstJudgements.FirstOrDefault(h => h.Row == row && h.Col == col);
+        Matrix?.WorstJudgements.FirstOrDefault() is { } worst && worst.Row == row && worst.Col == col ? worst : null;
 
     private bool IsCurrent(string row, string col) =>
         Pair is { } p && ((p.First == row && p.Second == col) || (p.First == col && p.Second == row));

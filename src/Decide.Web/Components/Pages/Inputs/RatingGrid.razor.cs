@@ -121,9 +121,13 @@ public partial class RatingGrid : IAsyncDisposable
     private string TermTitle(SheetCriterion c, ScaleTermView t) =>
         Descriptor(c, t.Code) is { } said ? $"{t.Label}: {said}" : t.Label;
 
-    private async Task OnCellKeyAsync(KeyboardEventArgs e, int row, int column)
+    /// <summary>
+    /// A key on a cell acts on the cell the grid has focused, which the browser's focus may not have reached yet
+    /// when keys come quickly one after the other (Home then ArrowDown): the grid's own position is the truth.
+    /// </summary>
+    private async Task OnCellKeyAsync(KeyboardEventArgs e)
     {
-        _keys.FocusAt(row, column);
+        var (row, column) = (_keys.Row, _keys.Column);
         var command = _keys.Press(e.Key, e.CtrlKey || e.AltKey || e.MetaKey);
         switch (command.Kind)
         {
