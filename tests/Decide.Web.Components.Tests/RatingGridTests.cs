@@ -187,8 +187,10 @@ public sealed class RatingGridTests : MudComponentTest
         };
         var cut = RenderGrid(sheet);
 
-        Assert.Empty(cut.FindAll("textarea, input, select, button"));
-        Assert.Empty(cut.FindAll("[tabindex]"));
+        // The only control left is the choice to show rationales in full; nothing in the grid can be changed.
+        Assert.Empty(cut.FindAll("table textarea, table input, table select, table button"));
+        Assert.Empty(cut.FindAll("td[tabindex]"));
+        Assert.DoesNotContain(cut.FindAll("button"), b => b.TextContent.Contains("submit", StringComparison.OrdinalIgnoreCase));
         Assert.Contains(Rationale, Cell(cut, "northgate/quality").TextContent);
         Assert.Throws<MissingEventHandlerException>(() => Cell(cut, "northgate/quality").KeyDown(new KeyboardEventArgs { Key = "P" }));
         Assert.Empty(_saves);

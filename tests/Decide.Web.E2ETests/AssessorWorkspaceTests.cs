@@ -36,6 +36,7 @@ public sealed class AssessorWorkspaceTests(BrowserSite site) : IClassFixture<Bro
         await Evidence.AssertAccessibleAsync(page, "the read-only rating sheet");
         await page.SetViewportSizeAsync(800, 1100);
         await Evidence.ScreenshotAsync(page, "assessor-02-demo-sheet-tablet");
+        await Evidence.AssertAccessibleAsync(page, "the read-only rating sheet on a tablet");
 
         await overview.OpenTabAsync("My weights");
         var weights = new WeightsPage(page);
@@ -123,6 +124,7 @@ public sealed class AssessorWorkspaceTests(BrowserSite site) : IClassFixture<Bro
         await Evidence.AssertAccessibleAsync(page, "the rating grid with its rationale open");
         await page.SetViewportSizeAsync(800, 1100);
         await Evidence.ScreenshotAsync(page, "assessor-10-sheet-tablet");
+        await Evidence.AssertAccessibleAsync(page, "the rating grid on a tablet");
         await page.Keyboard.PressAsync("Escape");
 
         await ratings.SubmitAsync();

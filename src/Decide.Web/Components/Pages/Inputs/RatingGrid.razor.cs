@@ -30,7 +30,8 @@ public partial class RatingGrid : IAsyncDisposable
     private bool _gridWired;
     private CellDraft? _editing;
     private bool _declining;
-    private IReadOnlyList<SheetIssue>? _issues;
+    private bool _checked;
+    private bool _fullRationales;
     private bool _confirming;
     private bool _submitting;
     private ProblemText? _submitProblem;
@@ -75,7 +76,7 @@ public partial class RatingGrid : IAsyncDisposable
         _keys = new GridKeyboard(Bidders.Count, Criteria.Count, Sheet.Scale.Select(t => t.Code).ToArray(), Rateable);
         _cellRefs = new ElementReference[Bidders.Count * Criteria.Count];
         _editing = null;
-        _issues = null;
+        _checked = false;
         _confirming = false;
     }
 
@@ -337,8 +338,9 @@ public partial class RatingGrid : IAsyncDisposable
             await SaveNowAsync(d);
         }
 
-        _issues = SheetIssue.Find(Sheet, _drafts.Values);
-        _confirming = _issues.Count == 0;
+        // The list stays and shrinks as the cells are put right.
+        _checked = true;
+        _confirming = SheetIssue.Find(Sheet, _drafts.Values).Count == 0;
     }
 
     private async Task SubmitAsync()
