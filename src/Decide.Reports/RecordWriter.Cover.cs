@@ -22,8 +22,8 @@ internal sealed partial class RecordWriter
             .. identity.Dates.Select(d => (d.Label, RecordText.Day(d.When))),
             ("Record produced", RecordText.When(_content.GeneratedAt)),
             ("Software", $"Decide {_content.SoftwareVersion}"),
-            ("Fingerprint", $"SHA-256 {_content.Fingerprint} of the evaluation file embedded in this PDF as {EvaluationRecordDocument.AttachmentName}"),
-        ]);
+            ("Fingerprint", $"{_content.Fingerprint}\n(SHA-256 of the evaluation file embedded in this PDF as {EvaluationRecordDocument.AttachmentName})"),
+        ], labelWidth: 100);
         _flow.Space(10);
         _flow.Caution("Read this first", RecordText.Cautions);
         if (_content.CertificateNote is { } note)

@@ -14,7 +14,7 @@ internal sealed partial class RecordWriter
         _flow.Paragraph($"Each cell is the panel's aggregate triangle on the rating scale ({RecordText.Number(scale.Minimum, 0)}–{RecordText.Number(scale.Maximum, 0)}) or the measured value, then its normalised and weighted form ṽ used for the distances. \"Raters\" counts the assessors whose terms went in; declined cells and moderated terms are named.");
         var criteria = Evaluation.Criteria.ToDictionary(c => c.Id, StringComparer.Ordinal);
         _flow.Table(
-            [new("Alternative", 2.2), new("Criterion", 2.6), new("Aggregate", 2.2), new("Weighted ṽ", 2.4), new("Raters", 0.9, CellAlign.Right), new("Notes", 3)],
+            [new("Alternative", 2.2), new("Criterion", 2.6), new("Aggregate", 2.2), new("Weighted ṽ", 2.4), new("Raters", 1.1, CellAlign.Right), new("Notes", 3)],
             analysis.Matrix.Select(c => (IReadOnlyList<string>)
             [
                 _names.Alternative(c.Alternative),
@@ -38,7 +38,7 @@ internal sealed partial class RecordWriter
             boldColumns: 0);
         if (analysis.Excluded.Count > 0)
         {
-            _flow.Paragraph("Not ranked (failed a pass/fail gate):", _style.BodyBold, after: 2);
+            _flow.Paragraph("Not ranked (failed a pass/fail gate):", _style.BodyBold, after: 2, keepWith: 50);
             var notes = Evaluation.Gates.Where(g => !g.Passed).ToDictionary(g => (g.Alternative, g.Criterion), g => g.Note);
             _flow.Table(
                 [new("Alternative", 3), new("Gate failed", 3), new("Reason recorded", 6)],

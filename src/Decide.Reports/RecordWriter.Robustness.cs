@@ -146,7 +146,7 @@ internal sealed partial class RecordWriter
         }
         else
         {
-            _flow.Paragraph($"Cells whose terms are more than {agreement.Tolerance} scale steps apart (listed for discussion):", after: 2);
+            _flow.Paragraph($"Cells whose terms are more than {agreement.Tolerance} scale steps apart (listed for discussion):", after: 2, keepWith: 50);
             _flow.Table(
                 [new("Alternative", 2.4), new("Criterion", 3), new("Spread (steps)", 1.2, CellAlign.Right), new("Terms given", 5)],
                 agreement.ForDiscussion.Select(c => (IReadOnlyList<string>)

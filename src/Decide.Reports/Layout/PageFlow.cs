@@ -110,10 +110,14 @@ internal sealed class PageFlow : IDisposable
         Y += 3;
     }
 
-    public void Paragraph(string text, XFont? font = null, XBrush? brush = null, double indent = 0, double after = 5)
+    public void Paragraph(string text, XFont? font = null, XBrush? brush = null, double indent = 0, double after = 5, double keepWith = 0)
     {
         font ??= Style.Body;
         var height = font.GetHeight() * 1.12;
+        if (keepWith > 0)
+        {
+            EnsureSpace((TextPainter.Wrap(Gfx, text, font, Width - indent).Count * height) + keepWith);
+        }
         foreach (var line in TextPainter.Wrap(Gfx, text, font, Width - indent))
         {
             EnsureSpace(height);
@@ -210,7 +214,7 @@ internal sealed class PageFlow : IDisposable
     /// Draws a table. Cells wrap within their column; the header repeats on every page the table spans; a row breaks
     /// across pages only when it is taller than the space a fresh page offers.
     /// </summary>
-    public void Table(IReadOnlyList<TableColumn> columns, IEnumerable<IReadOnlyList<string>> rows, bool zebra = true, int boldColumns = 0)
+    public void Table(IReadOnlyList<TableColumn> columns, IEnumerable<IReadOnlyList<string>> rows, bool zebra = true, int boldColumns = 0, double keepWithBefore = 0)
     {
         var totalShare = columns.Sum(c => c.Share);
         var widths = columns.Select(c => Width * c.Share / totalShare).ToArray();
@@ -238,11 +242,15 @@ internal sealed class PageFlow : IDisposable
             Y += headerHeight;
         }
 
-        EnsureSpace(headerHeight + lineHeight + (2 * CellPadding));
+        var materialised = rows.ToArray();
+        var firstRowLines = materialised.Length == 0 ? 1 : columns.Select((c, i) =>
+            TextPainter.Wrap(Gfx, i < materialised[0].Count ? materialised[0][i] : "", i < boldColumns ? Style.CellBold : font, widths[i] - (2 * CellPadding)).Count).Max();
+        EnsureSpace(headerHeight + (Math.Min(firstRowLines, 6) * lineHeight) + (2 * CellPadding) + keepWithBefore);
+        Y += keepWithBefore;
         Header();
         var index = 0;
         var rule = new XPen(ReportStyle.Rule, 0.4);
-        foreach (var row in rows)
+        foreach (var row in materialised)
         {
             var cellLines = new IReadOnlyList<string>[columns.Count];
             for (var c = 0; c < columns.Count; c++)
