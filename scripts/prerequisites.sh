@@ -5,7 +5,8 @@
 # Debian packages the tests need:
 #   chromium           the browser the Playwright tests drive (Playwright cannot download its own here)
 #   fonts-dejavu-core  a font for the pages the browser renders and photographs
-test_packages=(chromium fonts-dejavu-core)
+#   poppler-utils      pdfsig, the external verifier of signed evaluation records (and pdftoppm to look at pages)
+test_packages=(chromium fonts-dejavu-core poppler-utils)
 
 apt_install() {
   local sudo=""
