@@ -79,7 +79,8 @@ internal sealed class PageFlow : IDisposable
         }
         else
         {
-            EnsureSpace(80);
+            EnsureSpace(100);
+            Y += 14;
         }
 
         var font = Style.Heading1;
