@@ -16,7 +16,7 @@ internal sealed partial class RecordWriter
 
         _flow.Paragraph("Each cell the panel agreed on after discussion. The individual terms are kept unchanged in the appendix; the agreed term replaced their aggregate in the decision matrix.");
         _flow.Table(
-            [new("Alternative", 2), new("Criterion", 2.2), new("Original terms", 2.2), new("Agreed", 0.9), new("Reason", 4.5), new("Recorded by, when", 2.2)],
+            [new("Alternative", 2), new("Criterion", 2.2), new("Original terms", 2.2), new("Agreed", 1.2), new("Reason", 4.5), new("Recorded by, when", 2.2)],
             _content.Moderation.Select(m => (IReadOnlyList<string>)
             [
                 _names.Alternative(m.Alternative), _names.Criterion(m.Criterion), string.Join(", ", m.OriginalTerms), m.ModeratedTerm, m.Reason,

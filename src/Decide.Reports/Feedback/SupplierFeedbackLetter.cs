@@ -85,9 +85,9 @@ public static class SupplierFeedbackLetter
         if (excluded is null)
         {
             Scores(flow, content, supplier.Id, winner == supplier.Id ? null : winner, names);
-            Reasons(flow, style, content, supplier.Id, winner == supplier.Id ? null : winner, names, scrub);
             flow.Paragraph($"Overall score (closeness coefficient, 0 to 1, higher is better): yours {(own is null ? "—" : RecordText.Closeness(own.Closeness))}"
-                + (winner is not null && winner != supplier.Id ? $"; the highest-ranked tender {RecordText.Closeness(analysis.Ranking[0].Closeness)}." : "."));
+                + (winner is not null && winner != supplier.Id ? $"; the highest-ranked tender {RecordText.Closeness(analysis.Ranking[0].Closeness)}." : "."), keepWith: 20);
+            Reasons(flow, style, content, supplier.Id, winner == supplier.Id ? null : winner, names, scrub);
         }
 
         flow.Caution("About this letter", [
