@@ -5,7 +5,7 @@
 # Debian packages the tests need:
 #   chromium           the browser the Playwright tests drive (Playwright cannot download its own here)
 #   fonts-dejavu-core  a font for the pages the browser renders and photographs
-#   poppler-utils      pdfsig and pdftotext: an outside check of the signed PDF record
+#   poppler-utils      pdfsig, the external verifier of signed evaluation records (and pdftoppm to look at pages)
 #   postgresql         the second database the data and service tests run against (a throwaway cluster)
 test_packages=(chromium fonts-dejavu-core poppler-utils postgresql)
 

@@ -33,7 +33,7 @@ public sealed class AnalyseCommand
     {
         Description = "Monte Carlo draws for rank acceptability; 0 skips it.",
         DefaultValueFactory = _ => RobustnessOptions.DefaultDraws,
-        CustomParser = WholeNumber(0, "0 skips rank acceptability"),
+        CustomParser = OptionParsers.WholeNumber(0, "0 skips rank acceptability"),
         HelpName = "N",
     };
 
@@ -41,7 +41,7 @@ public sealed class AnalyseCommand
     {
         Description = "Seed of the draws (a whole number, 0 or more); the same seed gives the same results.",
         DefaultValueFactory = _ => RobustnessOptions.DefaultSeed,
-        CustomParser = WholeNumber(0UL, null),
+        CustomParser = OptionParsers.WholeNumber(0UL, null),
         HelpName = "S",
     };
 
@@ -49,7 +49,7 @@ public sealed class AnalyseCommand
     {
         Description = "Threads for the draws (1 or more; default: the number of processors). The results do not depend on it.",
         DefaultValueFactory = _ => Environment.ProcessorCount,
-        CustomParser = WholeNumber(1, null),
+        CustomParser = OptionParsers.WholeNumber(1, null),
         HelpName = "T",
     };
 
@@ -103,27 +103,4 @@ public sealed class AnalyseCommand
 
         return ExitCodes.Success;
     });
-
-    /// <summary>
-    /// Parses a whole number of at least <paramref name="minimum"/>; anything else is a parse error naming the option,
-    /// what it accepts and what was given.
-    /// </summary>
-    private static Func<ArgumentResult, T> WholeNumber<T>(T minimum, string? note)
-        where T : struct, IBinaryInteger<T>
-    {
-        return result =>
-        {
-            var text = result.Tokens.Count > 0 ? result.Tokens[^1].Value : "";
-            var parsed = T.TryParse(text, NumberStyles.AllowLeadingSign, CultureInfo.InvariantCulture, out var value);
-            if (parsed && value >= minimum)
-            {
-                return value;
-            }
-
-            var option = result.Parent is OptionResult o ? o.Option.Name : "the value";
-            var tooLarge = !parsed && text.TrimStart('+').Length > 0 && text.TrimStart('+').All(char.IsAsciiDigit) ? ", which is too large" : "";
-            result.AddError($"{option} must be a whole number, {minimum} or more{(note is null ? "" : $" ({note})")}; got '{text}'{tooLarge}.");
-            return default;
-        };
-    }
 }

@@ -11,4 +11,7 @@ public static class ExitCodes
 
     /// <summary>The input was wrong: a bad option, a file that cannot be read, or an invalid evaluation (every problem on stderr).</summary>
     public const int InvalidInput = 2;
+
+    /// <summary><c>decide verify</c>: the record was read but at least one check failed (each failing check is named on stderr).</summary>
+    public const int VerificationFailed = 3;
 }

@@ -39,6 +39,8 @@ public static class Program
     {
         var root = new RootCommand("Decide: fuzzy multi-criteria evaluation for procurement panels.");
         root.Subcommands.Add(new AnalyseCommand(stdout, stderr).Command);
+        root.Subcommands.Add(new ReportCommand(stdout, stderr).Command);
+        root.Subcommands.Add(new VerifyCommand(stdout, stderr).Command);
         return root;
     }
 }

@@ -1,0 +1,159 @@
+using System.Globalization;
+using Decide.Reports.Layout;
+using PdfSharp.Drawing;
+
+namespace Decide.Reports;
+
+internal sealed partial class RecordWriter
+{
+    private void Robustness()
+    {
+        _flow.Section("6 Robustness");
+        var robustness = _content.Robustness;
+        var sensitivity = robustness.Sensitivity;
+        _flow.Paragraph("These checks show how far the ranking depends on the weights, the individual assessors, the set of bids and the method. They are diagnostic: nothing here changes the ranking or re-weights anyone.");
+        _flow.Bullets(robustness.Summary);
+
+        var ranking = _content.Analysis.Ranking;
+        var colours = ranking.Select((r, i) => (r.Alternative, i)).ToDictionary(p => p.Alternative, p => p.i, StringComparer.Ordinal);
+        if (sensitivity.Sweeps.Count > 0 && ranking.Count > 1)
+        {
+            _flow.Heading("Weight sweeps", keepWith: 220);
+            _flow.Paragraph("Closeness of each alternative as one criterion's share of the weight runs from 0% to 100% (the others keep their proportions). Dashed line: the current share. Rings: where two lines cross and the order changes.", _style.Cell, _style.MutedBrush);
+            var legendArea = new XRect(_flow.Left, _flow.Y, _flow.Width, 40);
+            _flow.Y += ChartPainter.Legend(_flow.Gfx, legendArea, ranking.Select(r => (_names.Alternative(r.Alternative), colours[r.Alternative])).ToArray(), _style) + 4;
+            const double chartHeight = 150;
+            foreach (var pair in sensitivity.Sweeps.Chunk(2))
+            {
+                var row = _flow.Reserve(chartHeight);
+                var half = (row.Width - 16) / 2;
+                for (var i = 0; i < pair.Length; i++)
+                {
+                    var sweep = pair[i];
+                    var title = $"{_names.Criterion(sweep.Criterion)} (now {RecordText.Percent(sweep.Current)})";
+                    ChartPainter.Sweep(_flow.Gfx, new XRect(row.X + (i * (half + 16)), row.Y, half, chartHeight - 6), sweep, title, colours, _style);
+                }
+            }
+
+            var reversals = sensitivity.Sweeps.SelectMany(s => s.Reversals.Select(r => (s.Criterion, r))).ToArray();
+            if (reversals.Length > 0)
+            {
+                _flow.Heading("Reversal points");
+                _flow.Table(
+                    [new("Criterion", 3), new("At share", 1.2, CellAlign.Right), new("Rises above", 2.5), new("Falls below", 2.5), new("Confirmed", 1.2)],
+                    reversals.Select(p => (IReadOnlyList<string>)
+                    [
+                        _names.Criterion(p.Criterion), RecordText.Percent(p.r.Weight), _names.Alternative(p.r.Above), _names.Alternative(p.r.Below),
+                        p.r.Confirmed ? "yes" : "between samples",
+                    ]));
+            }
+        }
+
+        var critical = sensitivity.CriticalChanges.Changes.Where(c => c.Reverses).OrderBy(c => c.Absolute).ToArray();
+        _flow.Heading("Critical changes of weight");
+        if (critical.Length == 0)
+        {
+            _flow.Paragraph("No change of a single criterion's share between 0% and 100% reverses any pair of adjacent alternatives.");
+        }
+        else
+        {
+            _flow.Paragraph("The smallest change of one criterion's share that puts the challenger ahead of the leader, smallest first.", _style.Cell, _style.MutedBrush);
+            _flow.Table(
+                [new("Criterion", 2.6), new("Leader", 2.2), new("Challenger", 2.2), new("Share now", 1.1, CellAlign.Right), new("Reverses at", 1.1, CellAlign.Right), new("Change (points)", 1.2, CellAlign.Right), new("Change (% of share)", 1.3, CellAlign.Right)],
+                critical.Select(c => (IReadOnlyList<string>)
+                [
+                    _names.Criterion(c.Criterion), _names.Alternative(c.Leader), _names.Alternative(c.Challenger), RecordText.Percent(c.Current),
+                    RecordText.Percent(c.Weight!.Value), RecordText.Number(c.Absolute!.Value * 100, 1), RecordText.Number(c.Relative!.Value, 0) + "%",
+                ]));
+        }
+
+        var acceptability = sensitivity.Acceptability;
+        _flow.Heading("Rank acceptability");
+        if (acceptability.Draws == 0 || acceptability.Alternatives.Count == 0)
+        {
+            _flow.Paragraph("Not computed for this record.");
+        }
+        else
+        {
+            _flow.Paragraph($"Share of {acceptability.Draws.ToString("N0", CultureInfo.InvariantCulture)} random draws (seed {acceptability.Seed.ToString(CultureInfo.InvariantCulture)}) in which each alternative takes each rank; weights drawn {(acceptability.Weights == Decide.Core.Model.AcceptabilityWeights.Uniform ? "uniformly from all weightings" : "within the panel's fuzzy weights")} and ratings within the panel's triangles.", _style.Cell, _style.MutedBrush);
+            var ranks = acceptability.Alternatives.Max(a => a.Ranks.Count);
+            var byRanking = acceptability.Alternatives.OrderBy(a => colours.GetValueOrDefault(a.Alternative, int.MaxValue)).ToArray();
+            _flow.Table(
+                [new("Alternative", 3), .. Enumerable.Range(1, ranks).Select(r => new TableColumn($"Rank {r}", 1, CellAlign.Right)), new("First: 95% interval", 1.8, CellAlign.Right)],
+                byRanking.Select(a => (IReadOnlyList<string>)
+                [
+                    _names.Alternative(a.Alternative),
+                    .. Enumerable.Range(0, ranks).Select(r => r < a.Ranks.Count ? RecordText.Percent(a.Ranks[r]) : ""),
+                    $"{RecordText.Percent(a.Intervals[0].Low)}–{RecordText.Percent(a.Intervals[0].High)}",
+                ]));
+        }
+
+        _flow.Heading("Without each assessor (leave-one-out)");
+        if (sensitivity.LeaveOneOut.Count == 0)
+        {
+            _flow.Paragraph("Not applicable: the panel has a single assessor.");
+        }
+        else
+        {
+            _flow.Table(
+                [new("Without", 2.4), new("First place", 2.4), new("Winner changes", 1.3), new("Ranking", 6)],
+                sensitivity.LeaveOneOut.Select(l => (IReadOnlyList<string>)
+                [
+                    _names.Assessor(l.Assessor),
+                    l.Winner is null ? "—" : _names.Alternative(l.Winner),
+                    l.Problem is not null ? "no ranking" : l.WinnerChanged ? "YES" : "no",
+                    l.Problem ?? string.Join(" > ", l.Ranking.Select(_names.Alternative)),
+                ]));
+        }
+
+        _flow.Heading("Without each alternative (withdrawal or late disqualification)");
+        if (sensitivity.WithoutAlternative.Count == 0)
+        {
+            _flow.Paragraph("Not applicable: fewer than three alternatives are ranked.");
+        }
+        else
+        {
+            _flow.Table(
+                [new("Removed", 2.4), new("Order of the others", 6), new("Pairs that reverse", 3.6)],
+                sensitivity.WithoutAlternative.Select(w => (IReadOnlyList<string>)
+                [
+                    _names.Alternative(w.Alternative),
+                    string.Join(" > ", w.Ranking.Select(_names.Alternative)),
+                    w.Reversals.Count == 0 ? "none" : string.Join("; ", w.Reversals.Select(r => $"{_names.Alternative(r.NowAhead)} now ahead of {_names.Alternative(r.WasAhead)}")),
+                ]));
+        }
+
+        if (sensitivity.Methods.Count > 0)
+        {
+            _flow.Heading("Other methods");
+            _flow.Table(
+                [new("Method", 4), new("Ranking", 6), new("Kendall τ", 1, CellAlign.Right), new("Same winner", 1.2)],
+                sensitivity.Methods.Select(m => (IReadOnlyList<string>)
+                [
+                    m.Description, string.Join(" > ", m.Ranking.Select(_names.Alternative)),
+                    m.KendallTau is { } tau ? RecordText.Number(tau, 2) : "—", m.SameWinner ? "yes" : "NO",
+                ]));
+        }
+
+        var agreement = robustness.Agreement;
+        _flow.Heading("Panel agreement");
+        _flow.Paragraph(agreement.Concordance is { } w
+            ? $"Kendall's W = {RecordText.Number(w.W, 3)} over {w.Rankings} assessors' orders of {w.Objects} alternatives (χ² = {RecordText.Number(w.ChiSquare, 2)}, {w.DegreesOfFreedom} degrees of freedom, p = {RecordText.Number(w.PValue, 3)}); 1 means every assessor's ratings put the alternatives in the same order."
+            : "Kendall's W is not defined here (fewer than two assessors' orders, or every order tied).");
+        if (agreement.ForDiscussion.Count == 0)
+        {
+            _flow.Paragraph($"No cell's terms are more than {agreement.Tolerance} scale steps apart.");
+        }
+        else
+        {
+            _flow.Paragraph($"Cells whose terms are more than {agreement.Tolerance} scale steps apart (listed for discussion):", after: 2, keepWith: 50);
+            _flow.Table(
+                [new("Alternative", 2.4), new("Criterion", 3), new("Spread (steps)", 1.2, CellAlign.Right), new("Terms given", 5)],
+                agreement.ForDiscussion.Select(c => (IReadOnlyList<string>)
+                [
+                    _names.Alternative(c.Alternative), _names.Criterion(c.Criterion), c.Spread.ToString(CultureInfo.InvariantCulture),
+                    string.Join(", ", c.Terms.Select(t => $"{_names.Assessor(t.Assessor)} {t.Term}")),
+                ]));
+        }
+    }
+}
