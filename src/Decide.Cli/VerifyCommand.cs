@@ -1,3 +1,4 @@
+using Decide.Records;
 using System.CommandLine;
 using Decide.Reports.Verification;
 

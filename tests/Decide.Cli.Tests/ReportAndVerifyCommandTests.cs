@@ -1,3 +1,4 @@
+using Decide.Records;
 using System.Security.Cryptography;
 using System.Security.Cryptography.X509Certificates;
 using System.Text;

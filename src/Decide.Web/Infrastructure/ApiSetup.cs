@@ -6,6 +6,7 @@ using Decide.Web.Features.Evaluations;
 using Decide.Web.Features.Inputs;
 using Decide.Web.Features.Exchange;
 using Decide.Web.Features.Moderation;
+using Decide.Web.Features.Records;
 using Decide.Web.Features.Results;
 using Decide.Web.Features.SignOff;
 using Microsoft.AspNetCore.Http.Json;
@@ -20,6 +21,7 @@ public static class ApiSetup
 
     public static WebApplicationBuilder AddDecideApi(this WebApplicationBuilder builder)
     {
+        builder.Services.AddSingleton(builder.Configuration.GetSection(SigningOptions.Section).Get<SigningOptions>() ?? new SigningOptions());
         // Refusals made by the framework (no token, wrong content type, body too large) carry no detail of their
         // own; give each a sentence so that every problem document says what to do.
         builder.Services.AddProblemDetails(o => o.CustomizeProblemDetails = c => c.ProblemDetails.Detail ??= c.ProblemDetails.Status switch
@@ -67,6 +69,8 @@ public static class ApiSetup
         services.AddScoped<AnalysisService>();
         services.AddScoped<ExchangeService>();
         services.AddScoped<SignOffService>();
+        services.AddScoped<RecordService>();
+        services.AddSingleton<SigningCertificate>();
         return services;
     }
 
@@ -92,6 +96,7 @@ public static class ApiSetup
         api.MapExchangeEndpoints();
         api.MapAnalysisEndpoints();
         api.MapSignOffEndpoints();
+        api.MapRecordEndpoints();
         return app;
     }
 }

@@ -84,6 +84,11 @@ public sealed class AuthorisationMatrixTests(AuthorisationFixture fixture) : ICl
         ["GET /api/evaluations/{id:guid}/approvals/"] = "1433AAA3",
         ["POST /api/evaluations/{id:guid}/approvals/"] = "143333A3",
         ["POST /api/evaluations/{id:guid}/approvals/request"] = "1433A333",
+        ["GET /api/evaluations/{id:guid}/records"] = "1433AAA3",
+        ["GET /api/evaluations/{id:guid}/record"] = "1433AAA3",
+        ["GET /api/evaluations/{id:guid}/feedback/{alternative}"] = "1433A333",
+        // Anyone signed in may check a record they hold; the answer names only what the file itself says.
+        ["POST /api/records/verification"] = "1AAAAAAA",
     };
 
     public static TheoryData<string> CallerRows() => new(Callers);

@@ -26,8 +26,8 @@ public sealed class TwoInstancesTests : IDisposable
             return;
         }
 
-        _first = new DecideWebFactory(_database, first: true);
-        _second = new DecideWebFactory(_database, first: false);
+        _first = DecideWebFactory.SharingDatabase(_database, first: true);
+        _second = DecideWebFactory.SharingDatabase(_database, first: false);
     }
 
     [PostgresFact]

@@ -43,7 +43,10 @@ public sealed class DecideWebFactory : WebApplicationFactory<Program>
     /// One instance of several sharing the PostgreSQL database <paramref name="sharedDatabase"/>, served by Kestrel on
     /// a loopback port. Only the first instance seeds the demo; the owner drops the database.
     /// </summary>
-    public DecideWebFactory(string sharedDatabase, bool first)
+    public static DecideWebFactory SharingDatabase(string sharedDatabase, bool first) => new(sharedDatabase, first);
+
+    // Not public: a class fixture may have one public constructor only.
+    private DecideWebFactory(string sharedDatabase, bool first)
     {
         _postgresDatabase = sharedDatabase;
         _seedDemo = first;

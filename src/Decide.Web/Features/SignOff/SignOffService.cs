@@ -24,7 +24,9 @@ public sealed class SignOffService(
     CurrentUser user,
     UserManager<DecideUser> users,
     AuditWriter audit,
-    TimeProvider clock)
+    TimeProvider clock,
+    Records.RecordService records,
+    ILogger<SignOffService> log)
 {
     /// <summary>Shortest statement accepted, in characters.</summary>
     public const int MinStatementLength = 10;
@@ -138,7 +140,7 @@ public sealed class SignOffService(
         }
 
         await users.ResetAccessFailedCountAsync(account);
-        return await UnitOfWork.RunAsync(factory, async db =>
+        var state = await UnitOfWork.RunAsync(factory, async db =>
         {
             var m = await access.LoadAsync(db, id, ct);
             await CheckMayApproveAsync(db, m, ct);
@@ -165,6 +167,22 @@ public sealed class SignOffService(
             await EvaluationService.SaveAsync(db, m.Evaluation, ct);
             return await StateAsync(db, m.Evaluation, ct);
         }, ct);
+
+        if (state.Stage == EvaluationStage.SignedOff)
+        {
+            // The record is issued from the evaluation exactly as signed off. If that fails, the sign-off stands and
+            // the record is issued on first download instead; nothing is lost.
+            try
+            {
+                await records.IssueAsync(id, ct);
+            }
+            catch (Exception e) when (e is not OperationCanceledException)
+            {
+                log.LogError(e, "Issuing the signed record of evaluation {Id} failed; it will be issued on first download", id);
+            }
+        }
+
+        return state;
     }
 
     private async Task CheckMayApproveAsync(DecideDbContext db, Membership m, CancellationToken ct)

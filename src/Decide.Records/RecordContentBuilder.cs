@@ -4,7 +4,7 @@ using Decide.Core.Robustness;
 using Decide.Interchange;
 using Decide.Reports.Content;
 
-namespace Decide.Cli;
+namespace Decide.Records;
 
 /// <summary>
 /// Builds the record's content from an evaluation file alone: what a file cannot hold (declarations, an audit trail,

@@ -1,0 +1,67 @@
+using System.Security.Cryptography.X509Certificates;
+using Decide.Reports.Signing;
+using Decide.Web.Infrastructure;
+using Microsoft.AspNetCore.DataProtection;
+
+namespace Decide.Web.Features.Records;
+
+/// <summary>Where the certificate that signs evaluation records comes from (section <c>Signing</c>).</summary>
+public sealed class SigningOptions
+{
+    public const string Section = "Signing";
+
+    /// <summary>A PFX (PKCS #12) file with the organisation's signing certificate and its private key.</summary>
+    public string? CertificatePath { get; set; }
+
+    /// <summary>The PFX's password; give it through a secret store or the environment (Signing__CertificatePassword), never in a file in the repository.</summary>
+    public string? CertificatePassword { get; set; }
+}
+
+/// <summary>
+/// The certificate that signs evaluation records: the configured PFX, or, without one, a self-signed certificate
+/// the service creates once and keeps in its data folder, encrypted with Data Protection. A self-signed signature
+/// proves the file is unchanged since signing, not who signed it; the screens and the record say so.
+/// </summary>
+public sealed class SigningCertificate(SigningOptions options, DatabaseOptions database, IWebHostEnvironment environment,
+    IDataProtectionProvider protection, TimeProvider clock, ILogger<SigningCertificate> log)
+{
+    private readonly Lazy<X509Certificate2> _certificate = new(() => Load(options, database, environment, protection, clock, log));
+
+    /// <summary>The certificate with its private key.</summary>
+    public X509Certificate2 Certificate => _certificate.Value;
+
+    /// <summary>True when no certificate is configured and the service signs with its own.</summary>
+    public bool SelfSigned => SelfSignedCertificate.IsSelfSigned(Certificate);
+
+    private static X509Certificate2 Load(SigningOptions options, DatabaseOptions database, IWebHostEnvironment environment,
+        IDataProtectionProvider protection, TimeProvider clock, ILogger log)
+    {
+        if (!string.IsNullOrWhiteSpace(options.CertificatePath))
+        {
+            var path = Path.GetFullPath(options.CertificatePath, environment.ContentRootPath);
+            var certificate = X509CertificateLoader.LoadPkcs12FromFile(path, options.CertificatePassword, X509KeyStorageFlags.EphemeralKeySet);
+            if (!certificate.HasPrivateKey)
+            {
+                throw new InvalidOperationException($"Signing:CertificatePath '{path}' holds no private key; a signing certificate needs one.");
+            }
+
+            log.LogInformation("Signing evaluation records with {Subject} ({Thumbprint})", certificate.Subject, certificate.Thumbprint);
+            return certificate;
+        }
+
+        var folder = Path.GetFullPath(database.DataFolder, environment.ContentRootPath);
+        var file = Path.Combine(folder, "signing-certificate.protected");
+        var protector = protection.CreateProtector("Decide.SelfSignedRecordCertificate");
+        if (File.Exists(file))
+        {
+            return X509CertificateLoader.LoadPkcs12(protector.Unprotect(File.ReadAllBytes(file)), null, X509KeyStorageFlags.EphemeralKeySet);
+        }
+
+        using var created = SelfSignedCertificate.Create("CN=Decide evaluation records (self-signed)", clock.GetUtcNow(), TimeSpan.FromDays(3650));
+        var pfx = created.Export(X509ContentType.Pkcs12);
+        Directory.CreateDirectory(folder);
+        File.WriteAllBytes(file, protector.Protect(pfx));
+        log.LogWarning("No Signing:CertificatePath configured: created a self-signed certificate for evaluation records ({File}). It proves a record is unchanged, not who signed it.", file);
+        return X509CertificateLoader.LoadPkcs12(pfx, null, X509KeyStorageFlags.EphemeralKeySet);
+    }
+}
