@@ -57,7 +57,7 @@ public sealed class SigningCertificate(SigningOptions options, DatabaseOptions d
             return X509CertificateLoader.LoadPkcs12(protector.Unprotect(File.ReadAllBytes(file)), null, X509KeyStorageFlags.EphemeralKeySet);
         }
 
-        using var created = SelfSignedCertificate.Create("CN=Decide evaluation records (self-signed)", clock.GetUtcNow(), TimeSpan.FromDays(3650));
+        using var created = SelfSignedCertificate.Create("Decide evaluation records (self-signed)", clock.GetUtcNow(), TimeSpan.FromDays(3650));
         var pfx = created.Export(X509ContentType.Pkcs12);
         Directory.CreateDirectory(folder);
         File.WriteAllBytes(file, protector.Protect(pfx));
