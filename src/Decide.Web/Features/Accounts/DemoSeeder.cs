@@ -91,8 +91,14 @@ public sealed class DemoSeeder(
         await db.SaveChangesAsync(ct);
 
         logger.LogInformation(
-            "Seeded the demo evaluation {Reference}. Demo logins (password {Password}): administrator admin@decide.example; facilitator facilitator@{Domain}; assessors {Assessors}; price evaluator {Commercial}; observer probity@{Domain}; approver director@{Domain}.",
-            stored.Reference, DemoPassword, Domain, string.Join(", ", file.Evaluation.Assessors.Select(a => $"{a.Id}@{Domain}")), commercial is null ? "-" : $"{commercial.Id}@{Domain}", Domain, Domain);
+            "Seeded the demo evaluation {Reference}. Demo logins: administrator admin@decide.example; facilitator facilitator@{Domain}; assessors {Assessors}; price evaluator {Commercial}; observer probity@{Domain}; approver director@{Domain}.",
+            stored.Reference, Domain, string.Join(", ", file.Evaluation.Assessors.Select(a => $"{a.Id}@{Domain}")), commercial is null ? "-" : $"{commercial.Id}@{Domain}", Domain, Domain);
+        // Logs never carry a password, not even the demo's: the banner with it goes to the developer's console only.
+        if (!environment.IsDevelopment())
+        {
+            return;
+        }
+
         Console.WriteLine();
         Console.WriteLine($"Demo data seeded. Every demo account's password: {DemoPassword}");
         Console.WriteLine($"  administrator    admin@decide.example");
