@@ -86,8 +86,7 @@ public sealed class RecordService(
             return existing;
         }
 
-        var stored = await db.Evaluations.Include(e => e.Panel).ThenInclude(p => p.User).Include(e => e.Alternatives).AsSplitQuery()
-            .FirstOrDefaultAsync(e => e.Id == id, ct) ?? throw DomainProblem.NotFound("The evaluation");
+        var stored = await LoadAsync(db, id, ct) ?? throw DomainProblem.NotFound("The evaluation");
         if (stored.Stage != EvaluationStage.SignedOff)
         {
             throw DomainProblem.Stage($"Evaluation {stored.Reference} is at stage {stored.Stage}; the record is issued once it is signed off.");
@@ -141,8 +140,7 @@ public sealed class RecordService(
         ArchivedRecord made;
         await using (var db = await factory.CreateDbContextAsync(ct))
         {
-            var stored = await db.Evaluations.Include(e => e.Panel).ThenInclude(p => p.User).Include(e => e.Alternatives).AsSplitQuery()
-                .FirstAsync(e => e.Id == id, ct);
+            var stored = (await LoadAsync(db, id, ct))!;
             var file = EvaluationFileReader.Read(record.SnapshotJson);
             var content = await ContentAsync(db, stored, file, ct);
             var pdf = SupplierFeedbackLetter.Render(content, alternative);
@@ -279,6 +277,11 @@ public sealed class RecordService(
                 ?? throw new InvalidOperationException("The archive refused the record but holds none.");
         }
     }
+
+    /// <summary>The stored evaluation with its panel (and their accounts) and bids, as the record prints them.</summary>
+    private static Task<StoredEvaluation?> LoadAsync(DecideDbContext db, Guid id, CancellationToken ct) =>
+        db.Evaluations.Include(e => e.Panel).ThenInclude(p => p.User).Include(e => e.Alternatives).AsSplitQuery()
+            .FirstOrDefaultAsync(e => e.Id == id, ct);
 
     private static Task<ArchivedRecord?> ExistingAsync(DecideDbContext db, Guid id, string kind, string alternative, CancellationToken ct) =>
         db.Archive.AsNoTracking().FirstOrDefaultAsync(r => r.EvaluationId == id && r.Kind == kind && r.AlternativeCode == alternative, ct);

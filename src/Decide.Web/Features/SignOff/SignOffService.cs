@@ -74,7 +74,7 @@ public sealed class SignOffService(
                 throw DomainProblem.Invalid("note", $"tell the approvers what you recommend and why ({MinNoteLength} to {MaxStatementLength} characters); it becomes part of the record");
             }
 
-            var open = e.Panel.Where(p => p.Role == PanelRole.Assessor && p.SubmittedAt is null).Select(p => p.AssessorCode).ToArray();
+            var open = OpenSheets(e);
             if (open.Length > 0)
             {
                 throw DomainProblem.Stage($"Cannot ask for sign-off: the rating sheet of {string.Join(", ", open)} is not submitted.");
@@ -200,12 +200,16 @@ public sealed class SignOffService(
             throw DomainProblem.Stage($"You approved evaluation {m.Evaluation.Reference} on {mine.ApprovedAt:yyyy-MM-dd HH:mm} UTC; each approver approves once.");
         }
 
-        var open = m.Evaluation.Panel.Where(p => p.Role == PanelRole.Assessor && p.SubmittedAt is null).Select(p => p.AssessorCode).ToArray();
+        var open = OpenSheets(m.Evaluation);
         if (open.Length > 0)
         {
             throw DomainProblem.Stage($"Cannot approve: the rating sheet of {string.Join(", ", open)} is reopened and not submitted again.");
         }
     }
+
+    /// <summary>Assessors whose rating sheet is open (never submitted, or reopened and not submitted again).</summary>
+    private static string?[] OpenSheets(StoredEvaluation e) =>
+        e.Panel.Where(p => p.Role == PanelRole.Assessor && p.SubmittedAt is null).Select(p => p.AssessorCode).ToArray();
 
     private static string Fingerprint(EvaluationFile file) =>
         Convert.ToHexStringLower(SHA256.HashData(Encoding.UTF8.GetBytes(EvaluationFileWriter.ToJson(file))));
