@@ -63,14 +63,13 @@ public sealed class DecideWebFactory : WebApplicationFactory<Program>
         Directory.CreateDirectory(_folder);
         builder.UseEnvironment("Testing");
         builder.UseSetting("Database:SeedDemo", _seedDemo ? "true" : "false");
+        // Always a folder of its own: it also holds the service's self-signed record certificate, protected with
+        // this database's keys, which another test database could not read.
+        builder.UseSetting("Database:DataFolder", _folder);
         if (PostgresServer is { } server)
         {
             builder.UseSetting("Database:Provider", "Postgres");
             builder.UseSetting("ConnectionStrings:Decide", new NpgsqlConnectionStringBuilder(server) { Database = _postgresDatabase }.ConnectionString);
-        }
-        else
-        {
-            builder.UseSetting("Database:DataFolder", _folder);
         }
     }
 
