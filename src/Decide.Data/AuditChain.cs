@@ -37,28 +37,16 @@ public static class AuditChain
     public static readonly string Genesis = new('0', 64);
 
     /// <summary>
-    /// Adds the entry for <paramref name="e"/> to <paramref name="db"/> (not yet saved), after the last entry of
-    /// the chain as currently stored or already added in this context. Save it in the same SaveChanges as the
-    /// change it records; if another writer took the same index first, the unique index rejects the save and the
-    /// caller retries.
+    /// Adds the entry for <paramref name="e"/> to <paramref name="db"/>. Its position and hashes are fixed when the
+    /// context saves (<see cref="DecideDbContext"/>), under a lock on the chain, so that writers on the same chain —
+    /// a whole panel saving at once, through one instance or several — queue for a moment instead of colliding.
+    /// Save it in the same SaveChanges as the change it records.
     /// </summary>
-    public static async Task<AuditEntry> AppendAsync(
-        DecideDbContext db, string chain, AuditEvent e, string? userId, string? userName, DateTimeOffset at, CancellationToken ct = default)
+    public static AuditEntry Append(DecideDbContext db, string chain, AuditEvent e, string? userId, string? userName, DateTimeOffset at)
     {
-        var pending = db.ChangeTracker.Entries<AuditEntry>()
-            .Where(x => x.State == EntityState.Added && x.Entity.Chain == chain)
-            .Select(x => x.Entity)
-            .OrderByDescending(x => x.Index)
-            .FirstOrDefault();
-        var last = pending ?? await db.Audit.AsNoTracking()
-            .Where(x => x.Chain == chain)
-            .OrderByDescending(x => x.Index)
-            .FirstOrDefaultAsync(ct);
-
         var entry = new AuditEntry
         {
             Chain = chain,
-            Index = (last?.Index ?? 0) + 1,
             // Whole microseconds: the finest time PostgreSQL keeps, so the hashed text reads back identically.
             At = at.AddTicks(-(at.Ticks % TimeSpan.TicksPerMicrosecond)),
             UserId = userId,
@@ -67,11 +55,35 @@ public static class AuditChain
             Target = e.Target,
             OldValue = e.OldValue,
             NewValue = e.NewValue,
-            PreviousHash = last?.Hash ?? Genesis,
         };
-        entry.Hash = HashOf(entry);
-        db.Audit.Add(entry);
+        db.AppendToChain(entry);
         return entry;
+    }
+
+    /// <summary>
+    /// Gives each added, not yet chained entry its position after the last entry of its chain as stored now, and
+    /// its hashes. Call only while holding the chain's lock, inside the transaction that saves the entries.
+    /// </summary>
+    internal static async Task SealAsync(DecideDbContext db, IReadOnlyList<AuditEntry> added, CancellationToken ct)
+    {
+        var lastByChain = new Dictionary<string, (long Index, string Hash)>(StringComparer.Ordinal);
+        foreach (var entry in added)
+        {
+            if (!lastByChain.TryGetValue(entry.Chain, out var last))
+            {
+                var stored = await db.Audit.AsNoTracking()
+                    .Where(x => x.Chain == entry.Chain)
+                    .OrderByDescending(x => x.Index)
+                    .Select(x => new { x.Index, x.Hash })
+                    .FirstOrDefaultAsync(ct);
+                last = stored is null ? (0, Genesis) : (stored.Index, stored.Hash);
+            }
+
+            entry.Index = last.Index + 1;
+            entry.PreviousHash = last.Hash;
+            entry.Hash = HashOf(entry);
+            lastByChain[entry.Chain] = (entry.Index, entry.Hash);
+        }
     }
 
     /// <summary>Verifies one chain, or every chain when <paramref name="chain"/> is null.</summary>

@@ -13,6 +13,9 @@ namespace Decide.Data;
 public sealed class DecideDbContext(DbContextOptions<DecideDbContext> options)
     : IdentityDbContext<DecideUser>(options), IDataProtectionKeyContext
 {
+    // Audit entries added through AuditChain.Append, in the order added; they are chained when the context saves.
+    private readonly List<AuditEntry> appended = [];
+
     public DbSet<StoredEvaluation> Evaluations => Set<StoredEvaluation>();
 
     public DbSet<PanelMember> PanelMembers => Set<PanelMember>();
@@ -39,6 +42,34 @@ public sealed class DecideDbContext(DbContextOptions<DecideDbContext> options)
 
     /// <summary>ASP.NET Core Data Protection keys (cookies, antiforgery), shared by every instance.</summary>
     public DbSet<DataProtectionKey> DataProtectionKeys => Set<DataProtectionKey>();
+
+    /// <summary>
+    /// Saves, chaining any new audit entries after the last entry of their chain under the chain's lock (see
+    /// <see cref="ChainedSave"/>).
+    /// </summary>
+    public override Task<int> SaveChangesAsync(bool acceptAllChangesOnSuccess, CancellationToken cancellationToken = default)
+    {
+        var added = appended.Where(e => Entry(e).State == EntityState.Added).ToList();
+        return ChainedSave.SaveAsync(this, added, base.SaveChangesAsync, acceptAllChangesOnSuccess, cancellationToken);
+    }
+
+    /// <summary>Synchronous saves cannot take the chain's lock; audit entries must be saved with <see cref="SaveChangesAsync(bool, CancellationToken)"/>.</summary>
+    public override int SaveChanges(bool acceptAllChangesOnSuccess)
+    {
+        if (appended.Any(e => Entry(e).State == EntityState.Added))
+        {
+            throw new InvalidOperationException("Audit entries are chained under a lock and must be saved with SaveChangesAsync.");
+        }
+
+        return base.SaveChanges(acceptAllChangesOnSuccess);
+    }
+
+    /// <summary>Adds an entry to be chained at the next save (see <see cref="AuditChain.Append"/>).</summary>
+    internal void AppendToChain(AuditEntry entry)
+    {
+        Audit.Add(entry);
+        appended.Add(entry);
+    }
 
     protected override void OnModelCreating(ModelBuilder builder)
     {

@@ -15,7 +15,8 @@ public static class StoreErrors
         _ => false,
     };
 
-    /// <summary>True when the unique index broken is the audit chain's: another writer took the same position.</summary>
+    /// <summary>True when the unique index broken is the audit chain's: another writer took the same position (which the chain's lock
+    /// prevents; seeing one means a writer bypassed it).</summary>
     public static bool IsAuditCollision(DbUpdateException e) =>
         e is not DbUpdateConcurrencyException && IsUniqueViolation(e)
         && (e.InnerException?.Message.Contains("audit_entries", StringComparison.OrdinalIgnoreCase) == true

@@ -102,8 +102,8 @@ public sealed class AccountService(
 
         await UnitOfWork.RunAsync(factory, async db =>
         {
-            await audit.RecordAsync(db, null, new AuditEvent("account.created", $"accounts/{user.Id}", null,
-                $"{user.Email} ({user.DisplayName}){(request.Administrator ? ", administrator" : "")}"), ct);
+            audit.Record(db, null, new AuditEvent("account.created", $"accounts/{user.Id}", null,
+                $"{user.Email} ({user.DisplayName}){(request.Administrator ? ", administrator" : "")}"));
             return await db.SaveChangesAsync(ct);
         }, ct);
         return new AccountView(user.Id, user.Email!, user.DisplayName, request.Administrator, false);
@@ -138,7 +138,7 @@ public sealed class AccountService(
     private Task RecordAsync(DecideUser? user, string action, string? email, CancellationToken ct) =>
         UnitOfWork.RunAsync(factory, async db =>
         {
-            await audit.RecordForAsync(db, user?.Id, user?.Email ?? email, new AuditEvent(action, "accounts/sign-in", null, email), ct);
+            audit.RecordFor(db, user?.Id, user?.Email ?? email, new AuditEvent(action, "accounts/sign-in", null, email));
             return await db.SaveChangesAsync(ct);
         }, ct);
 }

@@ -86,7 +86,7 @@ public sealed class DemoSeeder(
             seat.SubmittedAt = now.AddDays(-2);
         }
 
-        await AuditChain.AppendAsync(db, stored.Id.ToString(), new AuditEvent("evaluation.seeded", $"evaluations/{stored.Id}", null,
+        AuditChain.Append(db, stored.Id.ToString(), new AuditEvent("evaluation.seeded", $"evaluations/{stored.Id}", null,
             $"demo evaluation imported from samples/{DemoFile}"), admin.Id, admin.Email, now);
         await db.SaveChangesAsync(ct);
 

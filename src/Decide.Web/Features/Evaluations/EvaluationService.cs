@@ -70,8 +70,8 @@ public sealed class EvaluationService(
             };
             evaluation.Panel.Add(new PanelMember { UserId = facilitator.Id, Role = PanelRole.Facilitator });
             db.Evaluations.Add(evaluation);
-            await audit.RecordAsync(db, evaluation.Id, new AuditEvent("evaluation.created", $"evaluations/{evaluation.Id}", null,
-                $"{evaluation.Reference} · {evaluation.Title}; facilitator {facilitator.Email}"), ct);
+            audit.Record(db, evaluation.Id, new AuditEvent("evaluation.created", $"evaluations/{evaluation.Id}", null,
+                $"{evaluation.Reference} · {evaluation.Title}; facilitator {facilitator.Email}"));
             await db.SaveChangesAsync(ct);
             return Summarise(evaluation, [PanelRole.Facilitator]);
         }, ct);
@@ -164,7 +164,7 @@ public sealed class EvaluationService(
             m.Evaluation.PlanJson = EvaluationFileWriter.ToJson(plan);
             m.Evaluation.Title = plan.Evaluation.Title;
             m.Evaluation.Version++;
-            await audit.RecordAsync(db, id, new AuditEvent("plan.updated", $"evaluations/{id}/plan", old, m.Evaluation.PlanJson), ct);
+            audit.Record(db, id, new AuditEvent("plan.updated", $"evaluations/{id}/plan", old, m.Evaluation.PlanJson));
             await SaveAsync(db, m.Evaluation, ct);
             return Summarise(m.Evaluation, m.Roles);
         }, ct);
@@ -247,8 +247,8 @@ public sealed class EvaluationService(
             db.PanelMembers.RemoveRange(m.Evaluation.Panel.Where(p => p.Role != PanelRole.Facilitator));
             db.PanelMembers.AddRange(seats);
             m.Evaluation.Version++;
-            await audit.RecordAsync(db, id, new AuditEvent("panel.updated", $"evaluations/{id}/panel", before,
-                Describe(m.Evaluation.Panel.Where(p => p.Role == PanelRole.Facilitator).Concat(seats))), ct);
+            audit.Record(db, id, new AuditEvent("panel.updated", $"evaluations/{id}/panel", before,
+                Describe(m.Evaluation.Panel.Where(p => p.Role == PanelRole.Facilitator).Concat(seats))));
             await SaveAsync(db, m.Evaluation, ct);
             return Summarise(m.Evaluation, m.Roles);
         }, ct);
@@ -299,8 +299,8 @@ public sealed class EvaluationService(
                 EvaluationId = id, Code = a.Code.Trim(), Name = a.Name.Trim(), Position = i, AddedAt = now,
             }));
             m.Evaluation.Version++;
-            await audit.RecordAsync(db, id, new AuditEvent("alternatives.updated", $"evaluations/{id}/alternatives", before,
-                string.Join("; ", request.Alternatives.Select(a => $"{a.Code.Trim()}={a.Name.Trim()}"))), ct);
+            audit.Record(db, id, new AuditEvent("alternatives.updated", $"evaluations/{id}/alternatives", before,
+                string.Join("; ", request.Alternatives.Select(a => $"{a.Code.Trim()}={a.Name.Trim()}"))));
             await SaveAsync(db, m.Evaluation, ct);
             return Summarise(m.Evaluation, m.Roles);
         }, ct);
@@ -430,10 +430,10 @@ public sealed class EvaluationService(
             old.Stage = EvaluationStage.Superseded;
             old.SupersededById = next.Id;
             old.Version++;
-            await audit.RecordAsync(db, old.Id, new AuditEvent("revision.opened", $"evaluations/{old.Id}", $"revision {old.Revision}",
-                $"revision {next.Revision} ({next.Id}): {next.RevisionReason}"), ct);
-            await audit.RecordAsync(db, next.Id, new AuditEvent("evaluation.created", $"evaluations/{next.Id}", null,
-                $"revision {next.Revision} of {old.Id}: {next.RevisionReason}"), ct);
+            audit.Record(db, old.Id, new AuditEvent("revision.opened", $"evaluations/{old.Id}", $"revision {old.Revision}",
+                $"revision {next.Revision} ({next.Id}): {next.RevisionReason}"));
+            audit.Record(db, next.Id, new AuditEvent("evaluation.created", $"evaluations/{next.Id}", null,
+                $"revision {next.Revision} of {old.Id}: {next.RevisionReason}"));
             await SaveAsync(db, old, ct);
             return Summarise(next, m.Roles);
         }, ct);
@@ -456,8 +456,8 @@ public sealed class EvaluationService(
             m.Evaluation.LegalHold = request.Hold;
             m.Evaluation.LegalHoldReason = request.Reason.Trim();
             m.Evaluation.Version++;
-            await audit.RecordAsync(db, id, new AuditEvent(request.Hold ? "legal-hold.set" : "legal-hold.lifted", $"evaluations/{id}",
-                before.ToString(), $"{request.Hold}: {request.Reason.Trim()}"), ct);
+            audit.Record(db, id, new AuditEvent(request.Hold ? "legal-hold.set" : "legal-hold.lifted", $"evaluations/{id}",
+                before.ToString(), $"{request.Hold}: {request.Reason.Trim()}"));
             await SaveAsync(db, m.Evaluation, ct);
             return Summarise(m.Evaluation, m.Roles);
         }, ct);
@@ -545,8 +545,8 @@ public sealed class EvaluationService(
             var warnings = await check(db, m);
             m.Evaluation.Stage = to;
             m.Evaluation.Version++;
-            await audit.RecordAsync(db, id, new AuditEvent(auditAction, $"evaluations/{id}", from.ToString(),
-                to + (warnings.Count > 0 ? $" (warnings: {string.Join(" ", warnings)})" : "")), ct);
+            audit.Record(db, id, new AuditEvent(auditAction, $"evaluations/{id}", from.ToString(),
+                to + (warnings.Count > 0 ? $" (warnings: {string.Join(" ", warnings)})" : "")));
             await SaveAsync(db, m.Evaluation, ct);
             return new TransitionResult(Summarise(m.Evaluation, m.Roles), warnings);
         }, ct);

@@ -173,8 +173,8 @@ public sealed partial class ExchangeService(
             }
 
             var stored = EvaluationImporter.Add(db, file, accounts, facilitator!.Id, user.Id, clock.GetUtcNow());
-            await audit.RecordAsync(db, stored.Id, new AuditEvent("evaluation.imported", $"evaluations/{stored.Id}", null,
-                $"{stored.Reference} · {stored.Title}; facilitator {facilitator.Email}; assessors {string.Join(", ", given.Select(x => $"{x.Key}={x.Value.Trim()}"))}; file sha256 {Sha256(Encoding.UTF8.GetBytes(raw))}"), ct);
+            audit.Record(db, stored.Id, new AuditEvent("evaluation.imported", $"evaluations/{stored.Id}", null,
+                $"{stored.Reference} · {stored.Title}; facilitator {facilitator.Email}; assessors {string.Join(", ", given.Select(x => $"{x.Key}={x.Value.Trim()}"))}; file sha256 {Sha256(Encoding.UTF8.GetBytes(raw))}"));
             await db.SaveChangesAsync(ct);
             return EvaluationService.Summarise(stored, [.. stored.Panel.Where(p => p.UserId == user.Id).Select(p => p.Role)]);
         }, ct);
@@ -183,7 +183,7 @@ public sealed partial class ExchangeService(
     private async Task<DownloadFile> Download(
         DecideDbContext db, StoredEvaluation e, string action, string target, string fileName, string contentType, byte[] content, CancellationToken ct)
     {
-        await audit.RecordAsync(db, e.Id, new AuditEvent(action, $"evaluations/{e.Id}/{target}", null, $"{fileName}; sha256 {Sha256(content)}"), ct);
+        audit.Record(db, e.Id, new AuditEvent(action, $"evaluations/{e.Id}/{target}", null, $"{fileName}; sha256 {Sha256(content)}"));
         await db.SaveChangesAsync(ct);
         return new DownloadFile(fileName, contentType, content);
     }

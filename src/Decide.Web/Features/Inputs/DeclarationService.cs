@@ -74,9 +74,9 @@ public sealed class DeclarationService(
                 seat.Version++;
             }
 
-            await audit.RecordAsync(db, id, new AuditEvent("declaration.signed", $"declarations/{x.Code}",
+            audit.Record(db, id, new AuditEvent("declaration.signed", $"declarations/{x.Code}",
                 before is null ? null : $"version {before}",
-                $"version {Declaration.Version} accepted as {string.Join(" and ", x.Seats.Select(s => s.Role.ToString().ToLowerInvariant()))}"), ct);
+                $"version {Declaration.Version} accepted as {string.Join(" and ", x.Seats.Select(s => s.Role.ToString().ToLowerInvariant()))}"));
             await db.SaveChangesAsync(ct);
             return await ViewAsync(db, x, ct);
         }, ct);
@@ -120,10 +120,10 @@ public sealed class DeclarationService(
                 seat.Version++;
             }
 
-            await audit.RecordAsync(db, id, new AuditEvent("declaration.names-confirmed", $"declarations/{x.Code}", null,
+            audit.Record(db, id, new AuditEvent("declaration.names-confirmed", $"declarations/{x.Code}", null,
                 conflicts.Count == 0
                     ? $"version {Declaration.Version} confirmed against {bidders.Count} bidders; no conflict of interest declared"
-                    : $"version {Declaration.Version} confirmed against {bidders.Count} bidders; conflicts of interest declared with {string.Join(", ", conflicts.Select(c => c.Alternative!.Trim()))}"), ct);
+                    : $"version {Declaration.Version} confirmed against {bidders.Count} bidders; conflicts of interest declared with {string.Join(", ", conflicts.Select(c => c.Alternative!.Trim()))}"));
             foreach (var conflict in conflicts)
             {
                 await DeclareAsync(db, x, conflict.Alternative!.Trim(), conflict.Statement!.Trim(), now, ct);
@@ -196,7 +196,7 @@ public sealed class DeclarationService(
         {
             EvaluationId = x.Id, UserId = user.Id, AlternativeCode = alternative, Statement = statement, DeclaredAt = now,
         });
-        await audit.RecordAsync(db, x.Id, new AuditEvent("conflict.declared", $"conflicts/{x.Code}/{alternative}", null, statement), ct);
+        audit.Record(db, x.Id, new AuditEvent("conflict.declared", $"conflicts/{x.Code}/{alternative}", null, statement));
         if (x.AssessorSeat is not { } seat)
         {
             return;
@@ -222,7 +222,7 @@ public sealed class DeclarationService(
                 rating.DeclinedReason = Declaration.RecusalReason;
                 rating.UpdatedAt = now;
                 rating.Version++;
-                await audit.RecordAsync(db, x.Id, new AuditEvent("rating.recused", target, old, InputStore.Describe(rating)), ct);
+                audit.Record(db, x.Id, new AuditEvent("rating.recused", target, old, InputStore.Describe(rating)));
             }
             else
             {
@@ -232,7 +232,7 @@ public sealed class DeclarationService(
                     DeclinedReason = Declaration.RecusalReason, UpdatedAt = now, Version = 1,
                 };
                 db.Ratings.Add(added);
-                await audit.RecordAsync(db, x.Id, new AuditEvent("rating.recused", target, null, InputStore.Describe(added)), ct);
+                audit.Record(db, x.Id, new AuditEvent("rating.recused", target, null, InputStore.Describe(added)));
             }
         }
     }

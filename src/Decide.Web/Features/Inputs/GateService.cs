@@ -80,7 +80,7 @@ public sealed class GateService(
             row.EnteredBy = user.Id;
             row.UpdatedAt = clock.GetUtcNow();
             row.Version++;
-            await audit.RecordAsync(db, id, new AuditEvent("gate.saved", $"gates/{bidder.Code}/{c.Id}", old, Describe(row)), ct);
+            audit.Record(db, id, new AuditEvent("gate.saved", $"gates/{bidder.Code}/{c.Id}", old, Describe(row)));
             await InputStore.SaveAsync(db, what, () => CurrentAsync(id, bidder.Code, c.Id, ct), ct);
             return Cell(row, await NumericValueService.NamesAsync(db, [user.Id], ct));
         }, ct);

@@ -41,7 +41,8 @@ internal static class InputStore
 
     /// <summary>
     /// Saves once. A row changed or first created by someone else in between becomes a 409 carrying the state
-    /// <paramref name="current"/> reads afresh; an audit-chain collision is left to <see cref="UnitOfWork"/>.
+    /// <paramref name="current"/> reads afresh. An audit-chain collision cannot happen (chains grow under a lock)
+    /// and is not dressed up as a conflict if it ever does.
     /// </summary>
     public static async Task SaveAsync(DecideDbContext db, string what, Func<Task<object?>> current, CancellationToken ct)
     {

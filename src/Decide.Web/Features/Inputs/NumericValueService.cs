@@ -80,7 +80,7 @@ public sealed class NumericValueService(
             row.EnteredBy = user.Id;
             row.UpdatedAt = clock.GetUtcNow();
             row.Version++;
-            await audit.RecordAsync(db, id, new AuditEvent("value.saved", $"values/{bidder.Code}/{c.Id}", old, Format(value, c)), ct);
+            audit.Record(db, id, new AuditEvent("value.saved", $"values/{bidder.Code}/{c.Id}", old, Format(value, c)));
             await InputStore.SaveAsync(db, what, () => CurrentAsync(id, bidder.Code, c.Id, ct), ct);
             return Cell(row, await NamesAsync(db, [user.Id], ct));
         }, ct);

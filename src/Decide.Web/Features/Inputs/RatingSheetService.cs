@@ -80,8 +80,8 @@ public sealed class RatingSheetService(
             row.DeclinedReason = request.Declined?.Trim();
             row.UpdatedAt = now;
             row.Version++;
-            await audit.RecordAsync(db, id, new AuditEvent(request.Declined is null ? "rating.saved" : "rating.declined",
-                $"ratings/{code}/{bidder.Code}/{c.Id}", old, InputStore.Describe(row)), ct);
+            audit.Record(db, id, new AuditEvent(request.Declined is null ? "rating.saved" : "rating.declined",
+                $"ratings/{code}/{bidder.Code}/{c.Id}", old, InputStore.Describe(row)));
             await InputStore.SaveAsync(db, what, () => CurrentCellAsync(id, code, bidder.Code, c.Id, x.Evaluation.MinRationaleLength, ct), ct);
             return Cell(row, bidder.Code, c.Id, x.Evaluation.MinRationaleLength, true);
         }, ct);
@@ -112,8 +112,8 @@ public sealed class RatingSheetService(
 
             seat.SubmittedAt = clock.GetUtcNow();
             seat.Version++;
-            await audit.RecordAsync(db, id, new AuditEvent("sheet.submitted", $"sheets/{seat.AssessorCode}", null,
-                $"{sheet.Progress.Done} of {sheet.Progress.Total} cells done ({sheet.Cells.Count(c => c.Declined is not null)} declined)"), ct);
+            audit.Record(db, id, new AuditEvent("sheet.submitted", $"sheets/{seat.AssessorCode}", null,
+                $"{sheet.Progress.Done} of {sheet.Progress.Total} cells done ({sheet.Cells.Count(c => c.Declined is not null)} declined)"));
             await InputStore.SaveAsync(db, "Your rating sheet", () => Task.FromResult<object?>(null), ct);
             return await SheetAsync(db, x, seat, ct);
         }, ct);

@@ -76,8 +76,8 @@ public sealed class WeightsService(
             var withdrawn = seat.WeightsSubmittedAt is not null;
             seat.WeightsSubmittedAt = null;
             seat.Version++;
-            await audit.RecordAsync(db, id, new AuditEvent("weights.updated", $"weights/{seat.AssessorCode}", before,
-                Describe(wanted) + (withdrawn ? " (the earlier submission is withdrawn until submitted again)" : "")), ct);
+            audit.Record(db, id, new AuditEvent("weights.updated", $"weights/{seat.AssessorCode}", before,
+                Describe(wanted) + (withdrawn ? " (the earlier submission is withdrawn until submitted again)" : "")));
             await InputStore.SaveAsync(db, "Your weight judgements", async () => await GetAsync(id, ct), ct);
             return View(x, seat, wanted);
         }, ct);
@@ -116,8 +116,8 @@ public sealed class WeightsService(
 
             seat.WeightsSubmittedAt = clock.GetUtcNow();
             seat.Version++;
-            await audit.RecordAsync(db, id, new AuditEvent("weights.submitted", $"weights/{seat.AssessorCode}", null,
-                Describe(judgements) + (feedback.Warnings.Count > 0 ? $" (warnings: {string.Join(" ", feedback.Warnings)})" : "")), ct);
+            audit.Record(db, id, new AuditEvent("weights.submitted", $"weights/{seat.AssessorCode}", null,
+                Describe(judgements) + (feedback.Warnings.Count > 0 ? $" (warnings: {string.Join(" ", feedback.Warnings)})" : "")));
             await InputStore.SaveAsync(db, "Your weight judgements", async () => await GetAsync(id, ct), ct);
             return new WeightsSubmitted(View(x, seat, judgements), feedback.Warnings);
         }, ct);

@@ -207,9 +207,9 @@ public sealed class ModerationService(
             };
             db.Moderation.Add(entry);
             m.Evaluation.Version++;
-            await audit.RecordAsync(db, id, new AuditEvent("moderation.recorded", $"moderation/{alternative}/{criterion}",
+            audit.Record(db, id, new AuditEvent("moderation.recorded", $"moderation/{alternative}/{criterion}",
                 inForce is null ? null : $"{inForce.Term}: {inForce.Reason}",
-                $"{term}: {reason} (agreed by {string.Join(", ", agreed)}; originals {string.Join(", ", originals.Select(o => $"{o.Assessor}={o.Term ?? "declined"}"))})"), ct);
+                $"{term}: {reason} (agreed by {string.Join(", ", agreed)}; originals {string.Join(", ", originals.Select(o => $"{o.Assessor}={o.Term ?? "declined"}"))})"));
             await EvaluationService.SaveAsync(db, m.Evaluation, ct);
             return View(entry, new Dictionary<string, string> { [user.Id] = await DisplayNameAsync(db, user.Id, ct) });
         }, ct);
@@ -240,8 +240,8 @@ public sealed class ModerationService(
             seat.SubmittedAt = null;
             seat.Version++;
             m.Evaluation.Version++;
-            await audit.RecordAsync(db, id, new AuditEvent("sheet.reopened", $"sheets/{assessorCode}",
-                $"submitted {submitted:O}", $"reopened: {reason}"), ct);
+            audit.Record(db, id, new AuditEvent("sheet.reopened", $"sheets/{assessorCode}",
+                $"submitted {submitted:O}", $"reopened: {reason}"));
             await EvaluationService.SaveAsync(db, m.Evaluation, ct);
             return new SheetState(assessorCode, null, seat.Version);
         }, ct);

@@ -68,7 +68,7 @@ public sealed class RecordService(
         var record = await IssueAsync(id, ct);
         await UnitOfWork.RunAsync(factory, async db =>
         {
-            await audit.RecordAsync(db, id, new AuditEvent("record.downloaded", $"evaluations/{id}/record", null, $"sha256 {record.Sha256}"), ct);
+            audit.Record(db, id, new AuditEvent("record.downloaded", $"evaluations/{id}/record", null, $"sha256 {record.Sha256}"));
             return await db.SaveChangesAsync(ct);
         }, ct);
         return new RecordFile(record.FileName, record.Content);
@@ -193,8 +193,8 @@ public sealed class RecordService(
         var all = checks.All(c => c.Passed);
         await UnitOfWork.RunAsync(factory, async db =>
         {
-            await audit.RecordAsync(db, null, new AuditEvent("record.verified", reference is null ? "records" : $"records/{reference}", null,
-                $"sha256 {sha}: {(all ? "every check passed" : "failed: " + string.Join(", ", checks.Where(c => !c.Passed).Select(c => c.Name)))}"), ct);
+            audit.Record(db, null, new AuditEvent("record.verified", reference is null ? "records" : $"records/{reference}", null,
+                $"sha256 {sha}: {(all ? "every check passed" : "failed: " + string.Join(", ", checks.Where(c => !c.Passed).Select(c => c.Name)))}"));
             return await db.SaveChangesAsync(ct);
         }, ct);
         return new RecordVerificationView(all, checks, reference);
@@ -263,7 +263,7 @@ public sealed class RecordService(
             return await UnitOfWork.RunAsync(factory, async db =>
             {
                 db.Archive.Add(record);
-                await audit.RecordAsync(db, record.EvaluationId, new AuditEvent($"{record.Kind}.archived", $"evaluations/{record.EvaluationId}/records", null, note), ct);
+                audit.Record(db, record.EvaluationId, new AuditEvent($"{record.Kind}.archived", $"evaluations/{record.EvaluationId}/records", null, note));
                 await db.SaveChangesAsync(ct);
                 return record;
             }, ct);

@@ -71,7 +71,7 @@ public sealed class ResultsService(
     private Task AuditViewAsync(Guid id, string shown, CancellationToken ct) =>
         UnitOfWork.RunAsync(factory, async db =>
         {
-            await audit.RecordAsync(db, id, new AuditEvent("results.viewed", $"evaluations/{id}/results", null, shown), ct);
+            audit.Record(db, id, new AuditEvent("results.viewed", $"evaluations/{id}/results", null, shown));
             return await db.SaveChangesAsync(ct);
         }, ct);
 }

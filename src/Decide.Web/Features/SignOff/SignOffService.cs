@@ -87,8 +87,8 @@ public sealed class SignOffService(
             e.SignOffRequestedBy = user.Id;
             e.SignOffRequestNote = note;
             e.Version++;
-            await audit.RecordAsync(db, id, new AuditEvent("signoff.requested", $"evaluations/{id}/sign-off", null,
-                $"{note} (evaluation file sha256 {hash})"), ct);
+            audit.Record(db, id, new AuditEvent("signoff.requested", $"evaluations/{id}/sign-off", null,
+                $"{note} (evaluation file sha256 {hash})"));
             await EvaluationService.SaveAsync(db, e, ct);
             return await StateAsync(db, e, ct);
         }, ct);
@@ -154,14 +154,14 @@ public sealed class SignOffService(
             db.Approvals.Add(new Approval { EvaluationId = id, UserId = user.Id, Statement = statement, ApprovedAt = now });
             var count = await db.Approvals.CountAsync(a => a.EvaluationId == id, ct) + 1;
             m.Evaluation.Version++;
-            await audit.RecordAsync(db, id, new AuditEvent("approval.recorded", $"evaluations/{id}/approvals", null,
-                $"approval {count} of {m.Evaluation.RequiredApprovals}: {statement} (evaluation file sha256 {hash})"), ct);
+            audit.Record(db, id, new AuditEvent("approval.recorded", $"evaluations/{id}/approvals", null,
+                $"approval {count} of {m.Evaluation.RequiredApprovals}: {statement} (evaluation file sha256 {hash})"));
             if (count >= m.Evaluation.RequiredApprovals)
             {
                 m.Evaluation.Stage = EvaluationStage.SignedOff;
                 m.Evaluation.SignedOffAt = now;
-                await audit.RecordAsync(db, id, new AuditEvent("evaluation.signed-off", $"evaluations/{id}",
-                    EvaluationStage.Moderation.ToString(), $"{EvaluationStage.SignedOff} after {count} approval(s); evaluation file sha256 {hash}"), ct);
+                audit.Record(db, id, new AuditEvent("evaluation.signed-off", $"evaluations/{id}",
+                    EvaluationStage.Moderation.ToString(), $"{EvaluationStage.SignedOff} after {count} approval(s); evaluation file sha256 {hash}"));
             }
 
             await EvaluationService.SaveAsync(db, m.Evaluation, ct);
@@ -217,7 +217,7 @@ public sealed class SignOffService(
     private Task RecordRefusalAsync(Guid id, string why, CancellationToken ct) =>
         UnitOfWork.RunAsync(factory, async db =>
         {
-            await audit.RecordAsync(db, id, new AuditEvent("approval.refused", $"evaluations/{id}/approvals", null, why), ct);
+            audit.Record(db, id, new AuditEvent("approval.refused", $"evaluations/{id}/approvals", null, why));
             return await db.SaveChangesAsync(ct);
         }, ct);
 
