@@ -1,6 +1,6 @@
 #!/usr/bin/env bash
 # A throwaway PostgreSQL cluster for the tests: started in a temporary folder on a free loopback port, with trust
-# authentication and no fsync, and removed afterwards. Sourced by test.sh. When DECIDE_TEST_POSTGRES is already set
+# authentication and no fsync (DECIDE_PG_FSYNC=on for measurements), and removed afterwards. Sourced by test.sh. When DECIDE_TEST_POSTGRES is already set
 # (a server of your own), nothing is started and that server is used.
 
 pg_dir=""
@@ -25,7 +25,7 @@ start_test_postgres() {
   fi
   "${as[@]}" "$bin/initdb -D $pg_dir/data -U postgres -A trust --no-sync >$pg_dir/initdb.log 2>&1" \
     || { echo "initdb failed:"; cat "$pg_dir/initdb.log"; return 1; }
-  "${as[@]}" "$bin/pg_ctl -D $pg_dir/data -l $pg_dir/log -w start -o '-p $port -k $pg_dir -c listen_addresses=127.0.0.1 -c fsync=off -c max_connections=300'" >/dev/null \
+  "${as[@]}" "$bin/pg_ctl -D $pg_dir/data -l $pg_dir/log -w start -o '-p $port -k $pg_dir -c listen_addresses=127.0.0.1 -c fsync=${DECIDE_PG_FSYNC:-off} -c max_connections=300'" >/dev/null \
     || { echo "PostgreSQL did not start:"; cat "$pg_dir/log"; return 1; }
   pg_bin="$bin"
   export DECIDE_TEST_POSTGRES="Host=127.0.0.1;Port=$port;Username=postgres;Pooling=true;Maximum Pool Size=40"

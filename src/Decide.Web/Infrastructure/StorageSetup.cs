@@ -77,6 +77,13 @@ public static class StorageSetup
         await using (var db = await factory.CreateDbContextAsync())
         {
             await db.Database.MigrateAsync();
+            if (db.Database.ProviderName == "Microsoft.EntityFrameworkCore.Sqlite")
+            {
+                // Write-ahead log: readers (a panel reading its sheets) no longer wait for the writer, and a commit
+                // appends to the log instead of rewriting pages through a rollback journal. The setting stays with
+                // the file. Commits remain fully synchronous: an acknowledged save survives a crash or a power cut.
+                await db.Database.ExecuteSqlRawAsync("PRAGMA journal_mode=WAL;");
+            }
         }
 
         if (app.Services.GetRequiredService<DatabaseOptions>().SeedDemo)

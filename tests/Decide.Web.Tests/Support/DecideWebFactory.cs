@@ -1,4 +1,3 @@
-using System.Net.Http.Headers;
 using System.Net.Http.Json;
 using Decide.Web.Features.Accounts;
 using Microsoft.AspNetCore.Hosting;
@@ -14,7 +13,7 @@ namespace Decide.Web.Tests.Support;
 /// <c>DECIDE_TEST_POSTGRES</c> holds a PostgreSQL connection string (the test script starts a throwaway cluster and
 /// runs these tests a second time with it), a fresh PostgreSQL database dropped afterwards.
 /// </summary>
-public sealed class DecideWebFactory : WebApplicationFactory<Program>
+public sealed class DecideWebFactory : WebApplicationFactory<Program>, IDecideHost
 {
     private readonly string _folder = Path.Combine(Path.GetTempPath(), "decide-tests", Guid.NewGuid().ToString("N"));
 
@@ -74,15 +73,8 @@ public sealed class DecideWebFactory : WebApplicationFactory<Program>
     }
 
     /// <summary>A client signed in as <paramref name="email"/> with a bearer token.</summary>
-    public async Task<HttpClient> SignInAsync(string email, string password = DemoSeeder.DemoPassword)
-    {
-        var client = CreateClient();
-        var response = await client.PostAsJsonAsync("/api/auth/login", new { email, password });
-        response.EnsureSuccessStatusCode();
-        var token = await response.Content.ReadFromJsonAsync<TokenResponse>();
-        client.DefaultRequestHeaders.Authorization = new AuthenticationHeaderValue("Bearer", token!.AccessToken);
-        return client;
-    }
+    public Task<HttpClient> SignInAsync(string email, string password = DemoSeeder.DemoPassword) =>
+        BearerSignIn.SignInAsync(CreateClient(), email, password);
 
     /// <summary>The demo evaluation's id.</summary>
     public async Task<Guid> DemoEvaluationAsync()
@@ -132,8 +124,6 @@ public sealed class DecideWebFactory : WebApplicationFactory<Program>
         using var drop = new NpgsqlCommand($"DROP DATABASE IF EXISTS \"{_postgresDatabase}\" WITH (FORCE)", connection);
         drop.ExecuteNonQuery();
     }
-
-    private sealed record TokenResponse(string AccessToken);
 
     private sealed record Summary(Guid Id);
 }

@@ -14,7 +14,7 @@ namespace Decide.Web.Tests.Support;
 /// </summary>
 public static class SaveBurst
 {
-    public static async Task RunAsync(IReadOnlyList<DecideWebFactory> instances, int sessions)
+    public static async Task RunAsync(IReadOnlyList<IDecideHost> instances, int sessions)
     {
         var scenario = await new ScenarioBuilder(instances[0]).BuildAsync(EvaluationStage.Scoring);
         await scenario.ConfirmNamesAsync(scenario.Ashby);

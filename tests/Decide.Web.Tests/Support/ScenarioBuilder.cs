@@ -14,7 +14,7 @@ namespace Decide.Web.Tests.Support;
 /// The panel: assessors <see cref="Ashby"/> (every linguistic criterion) and <see cref="Brook"/> (quality and
 /// staffing only), price evaluator <see cref="Carrow"/>, an observer and the facilitator.
 /// </remarks>
-public sealed class ScenarioBuilder(DecideWebFactory factory)
+public sealed class ScenarioBuilder(IDecideHost factory)
 {
     public const string Password = "Scenario-pass-2026";
     public const string Ashby = "ashby";
