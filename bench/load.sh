@@ -29,7 +29,7 @@ export ASPNETCORE_ENVIRONMENT=Production
 export ASPNETCORE_URLS="http://127.0.0.1:$port"
 export Database__DataFolder="$work"
 export Security__RequireHttps=false
-export Logging__LogLevel__Default=Warning
+export Logging__LogLevel__Default="${DECIDE_LOAD_LOG_LEVEL:-Warning}"
 if [ "$provider" = postgres ]; then
   # shellcheck source=../scripts/postgres.sh
   source scripts/postgres.sh
@@ -49,6 +49,7 @@ echo "Service ready on port $port ($provider)."
 
 status=0
 dotnet bench/Decide.Load/bin/Release/net10.0/Decide.Load.dll --url "http://127.0.0.1:$port" "$@" || status=$?
+[ -n "${DECIDE_LOAD_KEEP_LOG:-}" ] && cp "$work/server.log" "$DECIDE_LOAD_KEEP_LOG"
 if grep -q '"LogLevel":"Error"\|fail:' "$work/server.log"; then
   echo "The service logged errors:"; grep -A3 'fail:' "$work/server.log" | head -40
 fi
