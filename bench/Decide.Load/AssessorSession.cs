@@ -31,8 +31,8 @@ public sealed class AssessorSession(LoadPanel panel, string code, string email, 
 
     public async Task RunAsync(int index, CancellationToken ct)
     {
-        var random = new Random(HashCode.Combine(options.Seed, index));
-        await ThinkAsync(random, ct);
+        var random = new Random(unchecked(options.Seed * 7919 + index)); // HashCode.Combine would differ per process
+        await Task.Delay(TimeSpan.FromMilliseconds((double)options.RampMilliseconds * index / Math.Max(1, options.Assessors)), ct);
         Client = await TimedAsync(SignIn, () => Api.SignInAsync(handler, options.BaseUrl, email, panel.Password, ct));
         if (Client is null)
         {

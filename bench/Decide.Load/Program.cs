@@ -11,16 +11,17 @@ var assessors = new Option<int>("--assessors") { Description = "Simulated assess
 var rounds = new Option<int>("--rounds") { Description = "Times each assessor rates every cell of the sheet.", DefaultValueFactory = _ => 2 };
 var readEvery = new Option<int>("--read-every") { Description = "Read the sheet back after this many saves.", DefaultValueFactory = _ => 5 };
 var think = new Option<int>("--think-ms") { Description = "Mean pause between one assessor's requests (ms); 0 for a stress run.", DefaultValueFactory = _ => 1000 };
+var ramp = new Option<int>("--ramp-ms") { Description = "The assessors sign in spread over this time (ms).", DefaultValueFactory = _ => 10000 };
 var seed = new Option<int>("--seed") { Description = "Seed of pauses and terms.", DefaultValueFactory = _ => 20261202 };
 var admin = new Option<string>("--admin") { Description = "Administrator account (its password in DECIDE_LOAD_PASSWORD).", DefaultValueFactory = _ => "admin@decide.example" };
 
 var command = new RootCommand("Simulated assessors rating at once through the HTTP API, with latencies and a check that nothing was lost.")
 {
-    url, assessors, rounds, readEvery, think, seed, admin,
+    url, assessors, rounds, readEvery, think, ramp, seed, admin,
 };
 command.SetAction((parse, ct) => RunAsync(new LoadOptions(
     new Uri(parse.GetValue(url)!, UriKind.Absolute), parse.GetValue(admin)!, Environment.GetEnvironmentVariable("DECIDE_LOAD_PASSWORD") ?? "Decide-demo-2026",
-    parse.GetValue(assessors), parse.GetValue(rounds), Math.Max(1, parse.GetValue(readEvery)), parse.GetValue(think), parse.GetValue(seed)), ct));
+    parse.GetValue(assessors), parse.GetValue(rounds), Math.Max(1, parse.GetValue(readEvery)), parse.GetValue(think), parse.GetValue(ramp), parse.GetValue(seed)), ct));
 return await command.Parse(args).InvokeAsync();
 
 static async Task<int> RunAsync(LoadOptions options, CancellationToken ct)
@@ -46,7 +47,7 @@ static async Task<int> RunAsync(LoadOptions options, CancellationToken ct)
 
     var check = await StoredCheck.RunAsync(panel, sessions, ct);
     var inv = CultureInfo.InvariantCulture;
-    output.WriteLine(string.Create(inv, $"{options.Assessors} assessors, {options.Rounds} rounds, think {options.ThinkMilliseconds} ms, {clock.Elapsed.TotalSeconds:F1} s"));
+    output.WriteLine(string.Create(inv, $"{options.Assessors} assessors, {options.Rounds} rounds, think {options.ThinkMilliseconds} ms, ramp {options.RampMilliseconds} ms, {clock.Elapsed.TotalSeconds:F1} s"));
     output.WriteLine("operation         count  errors   per s    p50 ms   p95 ms   p99 ms   max ms");
     foreach (var operation in log.Operations)
     {

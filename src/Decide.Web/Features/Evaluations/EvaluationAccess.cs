@@ -43,7 +43,8 @@ public sealed class EvaluationAccess(CurrentUser user)
     public async Task<Membership> LoadAsync(DecideDbContext db, Guid id, CancellationToken ct = default)
     {
         var userId = user.Id;
-        var evaluation = await db.Evaluations.Include(e => e.Panel).FirstOrDefaultAsync(e => e.Id == id, ct)
+        // Two queries rather than a join: a join repeats the evaluation's row, plan included, once per panel seat.
+        var evaluation = await db.Evaluations.Include(e => e.Panel).AsSplitQuery().FirstOrDefaultAsync(e => e.Id == id, ct)
             ?? throw DomainProblem.NotFound($"Evaluation {id}");
         var seats = evaluation.Panel.Where(p => p.UserId == userId).ToArray();
         if (seats.Length == 0 && !user.IsAdministrator)
