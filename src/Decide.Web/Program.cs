@@ -5,6 +5,7 @@ var builder = WebApplication.CreateBuilder(args);
 builder.AddDecideOperations();
 builder.AddDecideStorage();
 builder.AddDecideIdentity();
+builder.AddDecideSecurity();
 builder.AddDecideApi();
 builder.AddDecideScreens();
 builder.Services.AddDecideFeatures();
@@ -13,6 +14,7 @@ var app = builder.Build();
 
 await app.PrepareDatabaseAsync();
 app.UseDecideForwardedHeaders();
+app.UseDecideSecurity();
 app.UseDecidePipeline();
 app.MapDecideOperations();
 app.MapDecideApi();

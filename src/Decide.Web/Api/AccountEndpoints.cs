@@ -1,5 +1,6 @@
 using Decide.Data.Entities;
 using Decide.Web.Features.Accounts;
+using Decide.Web.Infrastructure;
 using Microsoft.AspNetCore.Authentication;
 using Microsoft.AspNetCore.Authentication.BearerToken;
 using Microsoft.AspNetCore.Http.HttpResults;
@@ -17,9 +18,9 @@ public static class AccountEndpoints
     public static RouteGroupBuilder MapAccountEndpoints(this RouteGroupBuilder api)
     {
         var auth = api.MapGroup("/auth").WithTags("Sign-in");
-        auth.MapPost("/login", Login).AllowAnonymous()
+        auth.MapPost("/login", Login).AllowAnonymous().WithSignInLimits()
             .WithSummary("Sign in. Returns a bearer token (tokenType, accessToken, expiresIn, refreshToken), or sets a cookie with ?useCookies=true.");
-        auth.MapPost("/refresh", Refresh).AllowAnonymous().WithSummary("Exchange a refresh token for a new access token.");
+        auth.MapPost("/refresh", Refresh).AllowAnonymous().WithSignInLimits().WithSummary("Exchange a refresh token for a new access token.");
         auth.MapPost("/logout", (Delegate)Logout).RequireAuthorization().WithSummary("Sign out (cookie).");
 
         var accounts = api.MapGroup("/accounts").WithTags("Accounts").RequireAuthorization();

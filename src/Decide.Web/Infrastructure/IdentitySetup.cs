@@ -36,7 +36,7 @@ public static class IdentitySetup
             o.Cookie.Name = "decide.auth";
             o.Cookie.HttpOnly = true;
             o.Cookie.SameSite = SameSiteMode.Strict;
-            o.Cookie.SecurePolicy = CookieSecurePolicy.SameAsRequest;
+            // Secure: set for every cookie in SecuritySetup (always where HTTPS is required).
             o.ExpireTimeSpan = TimeSpan.FromHours(8);
             o.SlidingExpiration = true;
 

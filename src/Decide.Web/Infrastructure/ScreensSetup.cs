@@ -30,7 +30,7 @@ public static class ScreensSetup
 
     public static WebApplication MapDecideScreens(this WebApplication app)
     {
-        app.UseAntiforgery();
+        app.UseDecideAntiforgery();
         app.MapStaticAssets();
         app.MapSignInEndpoints();
         app.MapRazorComponents<App>().AddInteractiveServerRenderMode();

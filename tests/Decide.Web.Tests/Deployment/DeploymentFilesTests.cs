@@ -63,6 +63,37 @@ public sealed partial class DeploymentFilesTests
     }
 
     [Fact]
+    public void The_proxy_terminates_tls_and_redirects_plain_http_and_the_instances_require_https_from_it()
+    {
+        var code = string.Join("\n", File.ReadAllLines(RepositoryFiles.PathOf("deploy/nginx/decide.conf")).Select(l => l.Split('#')[0]));
+        var servers = code.Split("server {").Skip(1).ToArray();
+        var plain = Assert.Single(servers, s => s.Contains("listen 80;", StringComparison.Ordinal));
+        var tls = Assert.Single(servers, s => s.Contains("listen 443 ssl;", StringComparison.Ordinal));
+
+        // Port 80 forwards nothing to the instances: it only sends browsers to HTTPS.
+        Assert.DoesNotContain("proxy_pass", plain);
+        Assert.Contains("return 301 https://$host$request_uri;", plain);
+        Assert.Contains("proxy_pass http://decide;", tls);
+        Assert.Contains("ssl_certificate /etc/nginx/tls/decide.crt;", tls);
+        Assert.Contains("ssl_certificate_key /etc/nginx/tls/decide.key;", tls);
+        Assert.Contains("proxy_set_header X-Forwarded-Proto $scheme;", tls);
+        Assert.Contains("proxy_set_header X-Forwarded-For $proxy_add_x_forwarded_for;", tls);
+
+        var proxy = Map(Map(Compose(), "services"), "proxy");
+        var ports = ((YamlSequenceNode)proxy.Children[new YamlScalarNode("ports")]).Children.Select(c => c.ToString()).ToArray();
+        Assert.Contains("443:443", ports);
+        var mounted = ((YamlSequenceNode)proxy.Children[new YamlScalarNode("volumes")]).Children.Select(c => c.ToString()).ToArray();
+        Assert.Contains("./tls:/etc/nginx/tls:ro", mounted);
+
+        // The instances require HTTPS and trust the proxy's X-Forwarded-Proto; the container's own health check asks
+        // over plain HTTP, which the service never redirects (Security/HttpsTests).
+        var settings = File.ReadAllLines(RepositoryFiles.PathOf("deploy/decide.env.example")).Where(l => l.Length > 0 && !l.StartsWith('#')).ToArray();
+        Assert.Contains("Security__RequireHttps=true", settings);
+        Assert.Contains(settings, l => l.StartsWith("Proxy__KnownNetworks__0=", StringComparison.Ordinal) && l.Length > "Proxy__KnownNetworks__0=".Length);
+        Assert.Contains("GET /health/live HTTP/1.0", File.ReadAllText(RepositoryFiles.PathOf("deploy/healthcheck.sh")));
+    }
+
+    [Fact]
     public void The_dockerfile_builds_in_one_stage_and_runs_as_a_non_root_user_with_a_volume_and_a_health_check()
     {
         var docker = File.ReadAllText(RepositoryFiles.PathOf("Dockerfile"));

@@ -12,8 +12,10 @@ namespace Decide.Web.Tests.Support;
 /// and signs demo users in. The database is a SQLite file, or, when the environment variable
 /// <c>DECIDE_TEST_POSTGRES</c> holds a PostgreSQL connection string (the test script starts a throwaway cluster and
 /// runs these tests a second time with it), a fresh PostgreSQL database dropped afterwards.
+/// The in-memory server speaks plain HTTP, so HTTPS is not required here, and the sign-in limits are lifted (tests
+/// sign in far more often than people do); <c>Security/SecuredWebFactory</c> keeps both as deployed.
 /// </summary>
-public sealed class DecideWebFactory : WebApplicationFactory<Program>, IDecideHost
+public class DecideWebFactory : WebApplicationFactory<Program>, IDecideHost
 {
     private readonly string _folder = Path.Combine(Path.GetTempPath(), "decide-tests", Guid.NewGuid().ToString("N"));
 
@@ -54,6 +56,12 @@ public sealed class DecideWebFactory : WebApplicationFactory<Program>, IDecideHo
         StartServer();
     }
 
+    /// <summary>
+    /// False (the usual fixture): HTTPS is not required and sign-in limits are lifted. True keeps the deployed
+    /// defaults of section <c>Security</c>.
+    /// </summary>
+    protected virtual bool SecurityAsDeployed => false;
+
     /// <summary>"Sqlite" or "Postgres": the provider these tests run against.</summary>
     public static string Provider => PostgresServer is null ? "Sqlite" : "Postgres";
 
@@ -65,6 +73,12 @@ public sealed class DecideWebFactory : WebApplicationFactory<Program>, IDecideHo
         // Always a folder of its own: it also holds the service's self-signed record certificate, protected with
         // this database's keys, which another test database could not read.
         builder.UseSetting("Database:DataFolder", _folder);
+        if (!SecurityAsDeployed)
+        {
+            builder.UseSetting("Security:RequireHttps", "false");
+            builder.UseSetting("Security:SignIn:PerAccountPermits", "100000");
+            builder.UseSetting("Security:SignIn:PerAddressPermits", "100000");
+        }
         if (PostgresServer is { } server)
         {
             builder.UseSetting("Database:Provider", "Postgres");

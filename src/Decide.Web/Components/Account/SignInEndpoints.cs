@@ -8,8 +8,9 @@ using Microsoft.AspNetCore.Mvc;
 namespace Decide.Web.Components.Account;
 
 /// <summary>
-/// The sign-in screen's form posts (with antiforgery): sign in with the cookie and go back where the person was
-/// going, or back to the sign-in screen saying what went wrong; sign out.
+/// The sign-in screen's form posts (both with antiforgery): sign in with the cookie and go back where the person was
+/// going, or back to the sign-in screen saying what went wrong (sign-in attempts are limited, see SecuritySetup);
+/// sign out.
 /// </summary>
 public static class SignInEndpoints
 {
@@ -19,9 +20,9 @@ public static class SignInEndpoints
     public static IEndpointRouteBuilder MapSignInEndpoints(this IEndpointRouteBuilder app)
     {
         var account = app.MapGroup("/account").ExcludeFromDescription();
-        account.MapPost("/signin", (Delegate)SignIn).AllowAnonymous()
+        account.MapPost("/signin", (Delegate)SignIn).AllowAnonymous().WithSignInLimits(returnsToForm: true)
             .WithSummary("Sign in from the sign-in screen; redirects to the return address, or back to the screen with the reason.");
-        account.MapPost("/signout", (Delegate)SignOut).AllowAnonymous()
+        account.MapPost("/signout", (Delegate)SignOut).AllowAnonymous().RequireAntiforgeryToken()
             .WithSummary("Sign out from a screen; redirects to the sign-in screen.");
         return app;
     }
