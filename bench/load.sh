@@ -29,6 +29,8 @@ export ASPNETCORE_ENVIRONMENT=Production
 export ASPNETCORE_URLS="http://127.0.0.1:$port"
 export Database__DataFolder="$work"
 export Security__RequireHttps=false
+# Every simulated assessor signs in from this one address; people sign in from many.
+export Security__SignIn__PerAddressPermits=5000
 export Logging__LogLevel__Default="${DECIDE_LOAD_LOG_LEVEL:-Warning}"
 if [ "$provider" = postgres ]; then
   # shellcheck source=../scripts/postgres.sh
