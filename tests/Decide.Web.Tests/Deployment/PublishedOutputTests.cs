@@ -1,6 +1,5 @@
 using System.Diagnostics;
 using System.Net;
-using System.Net.Sockets;
 using System.Text.Json;
 
 namespace Decide.Web.Tests.Deployment;
@@ -29,7 +28,7 @@ public sealed class PublishedOutputTests : IDisposable
         var publish = await RunAsync("dotnet", ["publish", RepositoryFiles.PathOf("src/Decide.Web/Decide.Web.csproj"), "-c", Configuration, "--no-build", "-o", output, "-nologo"], null);
         Assert.True(publish.ExitCode == 0, publish.Output);
 
-        var port = FreePort();
+        var port = Support.ServiceProcess.FreePort();
         var environment = new Dictionary<string, string>
         {
             ["ASPNETCORE_HTTP_PORTS"] = port.ToString(System.Globalization.CultureInfo.InvariantCulture),
@@ -95,13 +94,6 @@ public sealed class PublishedOutputTests : IDisposable
         {
             return false;
         }
-    }
-
-    private static int FreePort()
-    {
-        using var listener = new TcpListener(IPAddress.Loopback, 0);
-        listener.Start();
-        return ((IPEndPoint)listener.LocalEndpoint).Port;
     }
 
     private static Process Start(string file, IEnumerable<string> args, string? directory, IReadOnlyDictionary<string, string>? environment)

@@ -126,7 +126,8 @@ public sealed class ServiceProcess : IDecideHost, IDisposable
         }
     }
 
-    private static int FreePort()
+    /// <summary>A loopback port nobody listens on right now.</summary>
+    public static int FreePort()
     {
         using var listener = new TcpListener(IPAddress.Loopback, 0);
         listener.Start();
