@@ -1,3 +1,4 @@
+using System.Security.Cryptography;
 using System.Security.Cryptography.X509Certificates;
 using Decide.Reports.Signing;
 using Decide.Web.Infrastructure;
@@ -54,7 +55,19 @@ public sealed class SigningCertificate(SigningOptions options, DatabaseOptions d
         var protector = protection.CreateProtector("Decide.SelfSignedRecordCertificate");
         if (File.Exists(file))
         {
-            return X509CertificateLoader.LoadPkcs12(protector.Unprotect(File.ReadAllBytes(file)), null, X509KeyStorageFlags.EphemeralKeySet);
+            try
+            {
+                return X509CertificateLoader.LoadPkcs12(protector.Unprotect(File.ReadAllBytes(file)), null, X509KeyStorageFlags.EphemeralKeySet);
+            }
+            catch (CryptographicException e)
+            {
+                // Protected with keys this database does not hold (its key ring was lost or the file came from another
+                // installation). Records already signed stay verifiable: each carries its certificate. Keep the old
+                // file for the operator and make a new certificate.
+                var aside = $"{file}.unreadable-{clock.GetUtcNow():yyyyMMddHHmmss}";
+                File.Move(file, aside);
+                log.LogWarning(e, "The self-signed record certificate {File} cannot be decrypted with this database's keys; moved it to {Aside} and created a new one.", file, aside);
+            }
         }
 
         using var created = SelfSignedCertificate.Create("Decide evaluation records (self-signed)", clock.GetUtcNow(), TimeSpan.FromDays(3650));
