@@ -11,7 +11,8 @@ namespace Decide.Interchange;
 /// </summary>
 /// <remarks>
 /// Every problem is reported, not just the first, each as an <see cref="EvaluationError"/> whose path points into
-/// the file (<c>$.ratings.E1.S2.quality</c>): malformed JSON (with line and column), a value of the wrong JSON type,
+/// the file (<c>$.ratings.E1.S2.quality</c>): malformed JSON (with line and column), text that is not UTF-8 or holds
+/// half a surrogate pair (reported alone, before anything else is checked), a value of the wrong JSON type,
 /// an unknown member name, a name given twice in one object, a scale that breaks a rule, and everything the
 /// engine's <see cref="Decide.Core.Analysis.EvaluationValidator"/> finds (unknown ids and terms, missing ratings,
 /// inconsistent plans). A file that reads without error can be analysed.
@@ -76,11 +77,13 @@ public static partial class EvaluationFileReader
         return Read(File.ReadAllBytes(path));
     }
 
+    /// <summary>The parsed document, whose every string and name can be read as text (<see cref="TextCheck"/>).</summary>
     private static JsonDocument Parse(Func<JsonDocument> parse)
     {
+        JsonDocument document;
         try
         {
-            return parse();
+            document = parse();
         }
         catch (JsonException ex)
         {
@@ -88,6 +91,17 @@ public static partial class EvaluationFileReader
             var column = (ex.BytePositionInLine ?? 0) + 1;
             var reason = ReadContext.Sentence(PositionSuffix().Replace(ex.Message, "").Replace(" Change the reader options.", "", StringComparison.Ordinal));
             throw new InvalidEvaluationException(JsonPath.Root, $"not valid JSON at line {line}, column {column}: {reason}");
+        }
+
+        try
+        {
+            TextCheck.Require(document.RootElement);
+            return document;
+        }
+        catch
+        {
+            document.Dispose();
+            throw;
         }
     }
 
