@@ -58,8 +58,11 @@ public static class HostileValues
     /// <summary>How many copies a list is grown to.</summary>
     public static readonly int[] Copies = [2, 10, 200, 2000];
 
-    /// <summary>How many criteria an evaluation is widened by, keeping it valid.</summary>
-    public static readonly int[] Widths = [50, 400, 1500];
+    /// <summary>
+    /// How many criteria an evaluation is widened by, keeping it valid. Robustness costs grow faster than the square
+    /// of the number of criteria (docs/performance.md): 200 keeps a case within seconds.
+    /// </summary>
+    public static readonly int[] Widths = [20, 60, 200];
 
     /// <summary>
     /// Content types a client might send with the body. Most cases send JSON properly; the rest are wrong, missing or
