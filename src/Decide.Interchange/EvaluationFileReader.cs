@@ -47,12 +47,19 @@ public static partial class EvaluationFileReader
         return EvaluationParser.ParsePlan(document.RootElement);
     }
 
+    /// <summary>Reads a plan (see <see cref="ReadPlan(string)"/>) from UTF-8 bytes (a leading byte-order mark is allowed).</summary>
+    /// <exception cref="InvalidEvaluationException">The plan has problems; every one is listed.</exception>
+    public static EvaluationFile ReadPlan(ReadOnlyMemory<byte> utf8Json)
+    {
+        using var document = Parse(() => JsonDocument.Parse(WithoutMark(utf8Json), Options));
+        return EvaluationParser.ParsePlan(document.RootElement);
+    }
+
     /// <summary>Reads an evaluation from UTF-8 bytes (a leading byte-order mark is allowed).</summary>
     /// <exception cref="InvalidEvaluationException">The bytes are not a valid evaluation; every problem is listed.</exception>
     public static EvaluationFile Read(ReadOnlyMemory<byte> utf8Json)
     {
-        var bytes = utf8Json.Span.StartsWith((ReadOnlySpan<byte>)[0xEF, 0xBB, 0xBF]) ? utf8Json[3..] : utf8Json;
-        using var document = Parse(() => JsonDocument.Parse(bytes, Options));
+        using var document = Parse(() => JsonDocument.Parse(WithoutMark(utf8Json), Options));
         return EvaluationParser.Parse(document.RootElement);
     }
 
@@ -76,6 +83,9 @@ public static partial class EvaluationFileReader
         ArgumentNullException.ThrowIfNull(path);
         return Read(File.ReadAllBytes(path));
     }
+
+    private static ReadOnlyMemory<byte> WithoutMark(ReadOnlyMemory<byte> utf8Json) =>
+        utf8Json.Span.StartsWith((ReadOnlySpan<byte>)[0xEF, 0xBB, 0xBF]) ? utf8Json[3..] : utf8Json;
 
     /// <summary>The parsed document, whose every string and name can be read as text (<see cref="TextCheck"/>).</summary>
     private static JsonDocument Parse(Func<JsonDocument> parse)

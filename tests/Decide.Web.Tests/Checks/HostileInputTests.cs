@@ -111,6 +111,59 @@ public sealed class HostileInputTests(DecideWebFactory factory) : IClassFixture<
         Assert.Equal(before, await admin.GetStringAsync("/api/evaluations"));
     }
 
+    // Found by FuzzedInputTests (shrunk): bytes that are not UTF-8 inside the file or the plan passed the request's
+    // JSON binding and made the service throw when it took the element's text (500). They are refused by their path.
+
+    [Fact]
+    public async Task An_import_whose_file_holds_bytes_that_are_not_utf8_is_refused_by_their_path_and_stores_nothing()
+    {
+        var file = await EvaluationCopies.ExportDemoAsync(factory);
+        file["criteria"]![0]!["description"] = Placeholder;
+        var request = new System.Text.Json.Nodes.JsonObject
+        {
+            ["file"] = file, ["facilitatorEmail"] = DecideWebFactory.Facilitator,
+            ["accounts"] = System.Text.Json.Nodes.JsonNode.Parse(JsonSerializer.Serialize(EvaluationCopies.DemoAccounts(file))),
+        };
+        using var admin = await factory.SignInAsync(DecideWebFactory.Admin);
+        var before = await admin.GetStringAsync("/api/evaluations");
+
+        var response = await admin.PostAsync("/api/evaluations/import", WithRawBytes(request, [(byte)'"', (byte)'d', 0xEF, (byte)'n', (byte)'"']));
+
+        var problem = await AssertProblemAsync(response, "bytes that are not UTF-8 in the file");
+        ApiAssert.HasError(problem, "file.criteria[0].description", "not UTF-8");
+        Assert.Equal(before, await admin.GetStringAsync("/api/evaluations"));
+    }
+
+    [Fact]
+    public async Task A_plan_holding_bytes_that_are_not_utf8_is_refused_by_their_path_and_the_plan_is_unchanged()
+    {
+        using var s = await new ScenarioBuilder(factory).BuildAsync(EvaluationStage.Setup);
+        var detail = await s.DetailAsync();
+        var plan = System.Text.Json.Nodes.JsonNode.Parse(detail.GetProperty("plan").GetRawText())!;
+        plan["title"] = Placeholder;
+        var before = await s.StateAsync(s.Facilitator, "");
+
+        var response = await s.Facilitator.PutAsync(s.Url("/plan"), WithRawBytes(
+            new System.Text.Json.Nodes.JsonObject { ["plan"] = plan, ["version"] = await s.VersionAsync() }, [(byte)'"', 0xC3, 0x28, (byte)'"']));
+
+        var problem = await AssertProblemAsync(response, "bytes that are not UTF-8 in the plan");
+        ApiAssert.HasError(problem, "plan.title", "not UTF-8");
+        Assert.Equal(before, await s.StateAsync(s.Facilitator, ""));
+    }
+
+    private const string Placeholder = "PLACEHOLDER-FOR-RAW-BYTES";
+
+    /// <summary><paramref name="body"/> as JSON with the string <see cref="Placeholder"/> replaced by <paramref name="raw"/> bytes.</summary>
+    private static ByteArrayContent WithRawBytes(System.Text.Json.Nodes.JsonNode body, byte[] raw)
+    {
+        var text = Encoding.UTF8.GetBytes(body.ToJsonString());
+        var marker = Encoding.UTF8.GetBytes($"\"{Placeholder}\"");
+        var at = text.AsSpan().IndexOf(marker);
+        var content = new ByteArrayContent([.. text[..at], .. raw, .. text[(at + marker.Length)..]]);
+        content.Headers.ContentType = new MediaTypeHeaderValue("application/json");
+        return content;
+    }
+
     private async Task AssertRefusedWithoutChangeAsync(string target, HttpContent content, string what)
     {
         using var s = await new ScenarioBuilder(factory).BuildAsync(target == "rating" ? EvaluationStage.Scoring : EvaluationStage.Setup);
