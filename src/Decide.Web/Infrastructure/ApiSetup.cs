@@ -78,6 +78,7 @@ public static class ApiSetup
     {
         app.UseExceptionHandler();
         app.UseStatusCodePages();
+        app.UseUtf8RequestBodies();
         app.UseAuthentication();
         app.UseAuthorization();
         return app;

@@ -29,6 +29,8 @@ public sealed class HostileInputTests(DecideWebFactory factory) : IClassFixture<
         ["not JSON"] = (Encoding.UTF8.GetBytes("term=G&rationale=fine"), "application/x-www-form-urlencoded"),
         ["truncated JSON"] = (Encoding.UTF8.GetBytes("{\"term\":\"G\",\"rationale\":"), "application/json"),
         ["a JSON array"] = (Encoding.UTF8.GetBytes("[1,2,3]"), "application/json"),
+        ["an unknown charset"] = (Encoding.UTF8.GetBytes("{\"term\":\"G\"}"), "application/json; charset=\"bogus\""),
+        ["UTF-16"] = (Encoding.Unicode.GetBytes("{\"term\":\"G\"}"), "application/json; charset=utf-16"),
     };
 
     public static TheoryData<string, string> TargetsAndBodies()
@@ -149,6 +151,24 @@ public sealed class HostileInputTests(DecideWebFactory factory) : IClassFixture<
         var problem = await AssertProblemAsync(response, "bytes that are not UTF-8 in the plan");
         ApiAssert.HasError(problem, "plan.title", "not UTF-8");
         Assert.Equal(before, await s.StateAsync(s.Facilitator, ""));
+    }
+
+    // Found by FuzzedInputTests (shrunk): a valid import sent with a charset the framework does not know failed in
+    // the JSON binding with an error that is not a bad request (500).
+
+    [Fact]
+    public async Task A_valid_import_declared_in_an_unknown_charset_is_refused_with_415_naming_the_charset()
+    {
+        var file = await EvaluationCopies.ExportDemoAsync(factory);
+        using var admin = await factory.SignInAsync(DecideWebFactory.Admin);
+        var before = await admin.GetStringAsync("/api/evaluations");
+        var content = JsonContent(new { file, facilitatorEmail = DecideWebFactory.Facilitator, accounts = EvaluationCopies.DemoAccounts(file) });
+        content.Headers.ContentType = MediaTypeHeaderValue.Parse("application/json; charset=\"bogus\"");
+
+        var response = await admin.PostAsync("/api/evaluations/import", content);
+
+        await ApiAssert.ProblemAsync(response, HttpStatusCode.UnsupportedMediaType, "charset \"bogus\"");
+        Assert.Equal(before, await admin.GetStringAsync("/api/evaluations"));
     }
 
     private const string Placeholder = "PLACEHOLDER-FOR-RAW-BYTES";
