@@ -11,7 +11,8 @@ namespace Decide.Interchange;
 /// </summary>
 /// <remarks>
 /// Every problem is reported, not just the first, each as an <see cref="EvaluationError"/> whose path points into
-/// the file (<c>$.ratings.E1.S2.quality</c>): malformed JSON (with line and column), a value of the wrong JSON type,
+/// the file (<c>$.ratings.E1.S2.quality</c>): malformed JSON (with line and column), text that is not UTF-8 or holds
+/// half a surrogate pair (reported alone, before anything else is checked), a value of the wrong JSON type,
 /// an unknown member name, a name given twice in one object, a scale that breaks a rule, and everything the
 /// engine's <see cref="Decide.Core.Analysis.EvaluationValidator"/> finds (unknown ids and terms, missing ratings,
 /// inconsistent plans). A file that reads without error can be analysed.
@@ -46,12 +47,19 @@ public static partial class EvaluationFileReader
         return EvaluationParser.ParsePlan(document.RootElement);
     }
 
+    /// <summary>Reads a plan (see <see cref="ReadPlan(string)"/>) from UTF-8 bytes (a leading byte-order mark is allowed).</summary>
+    /// <exception cref="InvalidEvaluationException">The plan has problems; every one is listed.</exception>
+    public static EvaluationFile ReadPlan(ReadOnlyMemory<byte> utf8Json)
+    {
+        using var document = Parse(() => JsonDocument.Parse(WithoutMark(utf8Json), Options));
+        return EvaluationParser.ParsePlan(document.RootElement);
+    }
+
     /// <summary>Reads an evaluation from UTF-8 bytes (a leading byte-order mark is allowed).</summary>
     /// <exception cref="InvalidEvaluationException">The bytes are not a valid evaluation; every problem is listed.</exception>
     public static EvaluationFile Read(ReadOnlyMemory<byte> utf8Json)
     {
-        var bytes = utf8Json.Span.StartsWith((ReadOnlySpan<byte>)[0xEF, 0xBB, 0xBF]) ? utf8Json[3..] : utf8Json;
-        using var document = Parse(() => JsonDocument.Parse(bytes, Options));
+        using var document = Parse(() => JsonDocument.Parse(WithoutMark(utf8Json), Options));
         return EvaluationParser.Parse(document.RootElement);
     }
 
@@ -76,11 +84,16 @@ public static partial class EvaluationFileReader
         return Read(File.ReadAllBytes(path));
     }
 
+    private static ReadOnlyMemory<byte> WithoutMark(ReadOnlyMemory<byte> utf8Json) =>
+        utf8Json.Span.StartsWith((ReadOnlySpan<byte>)[0xEF, 0xBB, 0xBF]) ? utf8Json[3..] : utf8Json;
+
+    /// <summary>The parsed document, whose every string and name can be read as text (<see cref="TextCheck"/>).</summary>
     private static JsonDocument Parse(Func<JsonDocument> parse)
     {
+        JsonDocument document;
         try
         {
-            return parse();
+            document = parse();
         }
         catch (JsonException ex)
         {
@@ -88,6 +101,17 @@ public static partial class EvaluationFileReader
             var column = (ex.BytePositionInLine ?? 0) + 1;
             var reason = ReadContext.Sentence(PositionSuffix().Replace(ex.Message, "").Replace(" Change the reader options.", "", StringComparison.Ordinal));
             throw new InvalidEvaluationException(JsonPath.Root, $"not valid JSON at line {line}, column {column}: {reason}");
+        }
+
+        try
+        {
+            TextCheck.Require(document.RootElement);
+            return document;
+        }
+        catch
+        {
+            document.Dispose();
+            throw;
         }
     }
 

@@ -120,6 +120,21 @@ public sealed class RatingGridTests : MudComponentTest
     }
 
     [Fact]
+    public void The_rationale_and_the_reason_for_declining_stop_at_the_length_the_service_accepts()
+    {
+        // The browser enforces maxlength, so a long paste is cut there instead of sending a message larger than the
+        // circuit accepts (RequestLimits.MaxCircuitMessageBytes), which would drop the connection.
+        var cut = RenderGrid(Sheet());
+        Cell(cut, "northgate/quality").KeyDown(new KeyboardEventArgs { Key = "G" });
+        Cell(cut, "northgate/quality").KeyDown(new KeyboardEventArgs { Key = "Enter" });
+        Assert.Equal(RatingSheetService.MaxTextLength.ToString(System.Globalization.CultureInfo.InvariantCulture), cut.Find("textarea").GetAttribute("maxlength"));
+
+        Button(cut, "Decline this cell instead").Click();
+
+        Assert.Equal(RatingSheetService.MaxTextLength.ToString(System.Globalization.CultureInfo.InvariantCulture), cut.Find("#decline-reason").GetAttribute("maxlength"));
+    }
+
+    [Fact]
     public void A_cell_saved_elsewhere_shows_the_stored_rating_and_keeps_the_assessors_change_aside()
     {
         var stored = new SheetCell("northgate", "quality", "VG", "Seen elsewhere: section 2 sets out audits.", null, 5, true, true);

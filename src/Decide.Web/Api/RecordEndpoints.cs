@@ -1,6 +1,7 @@
 using Decide.Web.Features.Records;
 using Decide.Web.Infrastructure;
 using Microsoft.AspNetCore.Http.HttpResults;
+using Microsoft.AspNetCore.Mvc;
 
 namespace Decide.Web.Api;
 
@@ -19,6 +20,7 @@ public static class RecordEndpoints
         group.MapGet("/evaluations/{id:guid}/feedback/{alternative}", Feedback)
             .WithSummary("A feedback letter for one bidder as PDF: its scores and the winner's, with the panel's reasons, nothing about other bidders (facilitator; after sign-off).");
         group.MapPost("/records/verification", Verify)
+            .WithMetadata(new RequestSizeLimitAttribute(RequestLimits.MaxRecordBytes))
             .WithSummary("Check a record: send the PDF as the body (Content-Type: application/pdf). Signature, unchanged since signing, embedded evaluation, re-analysis and archive match are answered separately.");
         return api;
     }

@@ -16,9 +16,6 @@ namespace Decide.Web.Infrastructure;
 /// <summary>HTTP plumbing shared by every endpoint: problem details, JSON, OpenAPI, limits, the pipeline.</summary>
 public static class ApiSetup
 {
-    /// <summary>Largest request body accepted (an evaluation file with every rationale fits comfortably).</summary>
-    public const long MaxRequestBytes = 10 * 1024 * 1024;
-
     public static WebApplicationBuilder AddDecideApi(this WebApplicationBuilder builder)
     {
         builder.Services.AddSingleton(builder.Configuration.GetSection(SigningOptions.Section).Get<SigningOptions>() ?? new SigningOptions());
@@ -28,7 +25,7 @@ public static class ApiSetup
         {
             StatusCodes.Status401Unauthorized => "Sign in first: send the bearer token from POST /api/auth/login (Authorization: Bearer …).",
             StatusCodes.Status405MethodNotAllowed => "This address does not accept that HTTP method; see /openapi/v1.json.",
-            StatusCodes.Status413PayloadTooLarge => $"The request body is larger than the limit of {MaxRequestBytes / (1024 * 1024)} MB.",
+            StatusCodes.Status413PayloadTooLarge => $"The request body is larger than the limit of {RequestLimits.Describe(RequestLimits.MaxRequestBodyBytes)}.",
             StatusCodes.Status415UnsupportedMediaType => "The request body must be JSON: send it with Content-Type: application/json.",
             _ => null,
         });
@@ -40,7 +37,7 @@ public static class ApiSetup
             o.SerializerOptions.Converters.Add(new JsonStringEnumConverter(System.Text.Json.JsonNamingPolicy.CamelCase));
             o.SerializerOptions.MaxDepth = 32;
         });
-        builder.WebHost.ConfigureKestrel(k => k.Limits.MaxRequestBodySize = MaxRequestBytes);
+        builder.WebHost.ConfigureKestrel(k => k.Limits.MaxRequestBodySize = RequestLimits.MaxRequestBodyBytes);
 
         // Malformed bodies reach the problem handler, which says what is wrong instead of a bare 400.
         builder.Services.Configure<RouteHandlerOptions>(o => o.ThrowOnBadRequest = true);
@@ -78,6 +75,7 @@ public static class ApiSetup
     {
         app.UseExceptionHandler();
         app.UseStatusCodePages();
+        app.UseUtf8RequestBodies();
         app.UseAuthentication();
         app.UseAuthorization();
         return app;

@@ -13,7 +13,9 @@ public sealed class ProblemHandler(IProblemDetailsService problems, ILogger<Prob
 {
     public async ValueTask<bool> TryHandleAsync(HttpContext context, Exception exception, CancellationToken cancellationToken)
     {
-        var problem = exception switch
+        var problem = TooLarge(exception) ? Build(StatusCodes.Status413PayloadTooLarge, "Request too large",
+                $"The request body is larger than the limit of {RequestLimits.Describe(BodyLimit(context))} for this address; nothing was read or saved.", null, null)
+            : exception switch
         {
             DomainProblem p => Build(p.Status, p.Title, p.Detail, p.Errors, p.Extensions),
             InvalidEvaluationException e => Build(StatusCodes.Status400BadRequest, "Invalid evaluation",
@@ -47,6 +49,27 @@ public sealed class ProblemHandler(IProblemDetailsService problems, ILogger<Prob
 
         return problem;
     }
+
+    /// <summary>
+    /// The server refused to read more of the body, perhaps wrapped by whoever was reading (the antiforgery check
+    /// reads a form first and reports any failure as a bad token).
+    /// </summary>
+    private static bool TooLarge(Exception? exception)
+    {
+        for (; exception is not null; exception = exception.InnerException)
+        {
+            if (exception is BadHttpRequestException { StatusCode: StatusCodes.Status413PayloadTooLarge })
+            {
+                return true;
+            }
+        }
+
+        return false;
+    }
+
+    /// <summary>The body limit in force for this request (an endpoint may have its own, see <see cref="RequestLimits"/>).</summary>
+    private static long BodyLimit(HttpContext context) =>
+        context.Features.Get<Microsoft.AspNetCore.Http.Features.IHttpMaxRequestBodySizeFeature>()?.MaxRequestBodySize ?? RequestLimits.MaxRequestBodyBytes;
 
     private static string Plain(BadHttpRequestException b) =>
         b.InnerException is System.Text.Json.JsonException json

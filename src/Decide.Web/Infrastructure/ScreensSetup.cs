@@ -15,7 +15,8 @@ public static class ScreensSetup
 {
     public static WebApplicationBuilder AddDecideScreens(this WebApplicationBuilder builder)
     {
-        builder.Services.AddRazorComponents().AddInteractiveServerComponents();
+        builder.Services.AddRazorComponents().AddInteractiveServerComponents()
+            .AddHubOptions(o => o.MaximumReceiveMessageSize = RequestLimits.MaxCircuitMessageBytes);
         builder.Services.AddCascadingAuthenticationState();
         builder.Services.AddScoped<AuthenticationStateProvider, SignedInStateProvider>();
         builder.Services.AddScoped<CircuitHandler, CircuitUserHandler>();

@@ -29,6 +29,8 @@ public sealed class HostileInputTests(DecideWebFactory factory) : IClassFixture<
         ["not JSON"] = (Encoding.UTF8.GetBytes("term=G&rationale=fine"), "application/x-www-form-urlencoded"),
         ["truncated JSON"] = (Encoding.UTF8.GetBytes("{\"term\":\"G\",\"rationale\":"), "application/json"),
         ["a JSON array"] = (Encoding.UTF8.GetBytes("[1,2,3]"), "application/json"),
+        ["an unknown charset"] = (Encoding.UTF8.GetBytes("{\"term\":\"G\"}"), "application/json; charset=\"bogus\""),
+        ["UTF-16"] = (Encoding.Unicode.GetBytes("{\"term\":\"G\"}"), "application/json; charset=utf-16"),
     };
 
     public static TheoryData<string, string> TargetsAndBodies()
@@ -109,6 +111,77 @@ public sealed class HostileInputTests(DecideWebFactory factory) : IClassFixture<
 
         await AssertProblemAsync(response, "unknown accounts");
         Assert.Equal(before, await admin.GetStringAsync("/api/evaluations"));
+    }
+
+    // Found by FuzzedInputTests (shrunk): bytes that are not UTF-8 inside the file or the plan passed the request's
+    // JSON binding and made the service throw when it took the element's text (500). They are refused by their path.
+
+    [Fact]
+    public async Task An_import_whose_file_holds_bytes_that_are_not_utf8_is_refused_by_their_path_and_stores_nothing()
+    {
+        var file = await EvaluationCopies.ExportDemoAsync(factory);
+        file["criteria"]![0]!["description"] = Placeholder;
+        var request = new System.Text.Json.Nodes.JsonObject
+        {
+            ["file"] = file, ["facilitatorEmail"] = DecideWebFactory.Facilitator,
+            ["accounts"] = System.Text.Json.Nodes.JsonNode.Parse(JsonSerializer.Serialize(EvaluationCopies.DemoAccounts(file))),
+        };
+        using var admin = await factory.SignInAsync(DecideWebFactory.Admin);
+        var before = await admin.GetStringAsync("/api/evaluations");
+
+        var response = await admin.PostAsync("/api/evaluations/import", WithRawBytes(request, [(byte)'"', (byte)'d', 0xEF, (byte)'n', (byte)'"']));
+
+        var problem = await AssertProblemAsync(response, "bytes that are not UTF-8 in the file");
+        ApiAssert.HasError(problem, "file.criteria[0].description", "not UTF-8");
+        Assert.Equal(before, await admin.GetStringAsync("/api/evaluations"));
+    }
+
+    [Fact]
+    public async Task A_plan_holding_bytes_that_are_not_utf8_is_refused_by_their_path_and_the_plan_is_unchanged()
+    {
+        using var s = await new ScenarioBuilder(factory).BuildAsync(EvaluationStage.Setup);
+        var detail = await s.DetailAsync();
+        var plan = System.Text.Json.Nodes.JsonNode.Parse(detail.GetProperty("plan").GetRawText())!;
+        plan["title"] = Placeholder;
+        var before = await s.StateAsync(s.Facilitator, "");
+
+        var response = await s.Facilitator.PutAsync(s.Url("/plan"), WithRawBytes(
+            new System.Text.Json.Nodes.JsonObject { ["plan"] = plan, ["version"] = await s.VersionAsync() }, [(byte)'"', 0xC3, 0x28, (byte)'"']));
+
+        var problem = await AssertProblemAsync(response, "bytes that are not UTF-8 in the plan");
+        ApiAssert.HasError(problem, "plan.title", "not UTF-8");
+        Assert.Equal(before, await s.StateAsync(s.Facilitator, ""));
+    }
+
+    // Found by FuzzedInputTests (shrunk): a valid import sent with a charset the framework does not know failed in
+    // the JSON binding with an error that is not a bad request (500).
+
+    [Fact]
+    public async Task A_valid_import_declared_in_an_unknown_charset_is_refused_with_415_naming_the_charset()
+    {
+        var file = await EvaluationCopies.ExportDemoAsync(factory);
+        using var admin = await factory.SignInAsync(DecideWebFactory.Admin);
+        var before = await admin.GetStringAsync("/api/evaluations");
+        var content = JsonContent(new { file, facilitatorEmail = DecideWebFactory.Facilitator, accounts = EvaluationCopies.DemoAccounts(file) });
+        content.Headers.ContentType = MediaTypeHeaderValue.Parse("application/json; charset=\"bogus\"");
+
+        var response = await admin.PostAsync("/api/evaluations/import", content);
+
+        await ApiAssert.ProblemAsync(response, HttpStatusCode.UnsupportedMediaType, "charset \"bogus\"");
+        Assert.Equal(before, await admin.GetStringAsync("/api/evaluations"));
+    }
+
+    private const string Placeholder = "PLACEHOLDER-FOR-RAW-BYTES";
+
+    /// <summary><paramref name="body"/> as JSON with the string <see cref="Placeholder"/> replaced by <paramref name="raw"/> bytes.</summary>
+    private static ByteArrayContent WithRawBytes(System.Text.Json.Nodes.JsonNode body, byte[] raw)
+    {
+        var text = Encoding.UTF8.GetBytes(body.ToJsonString());
+        var marker = Encoding.UTF8.GetBytes($"\"{Placeholder}\"");
+        var at = text.AsSpan().IndexOf(marker);
+        var content = new ByteArrayContent([.. text[..at], .. raw, .. text[(at + marker.Length)..]]);
+        content.Headers.ContentType = new MediaTypeHeaderValue("application/json");
+        return content;
     }
 
     private async Task AssertRefusedWithoutChangeAsync(string target, HttpContent content, string what)

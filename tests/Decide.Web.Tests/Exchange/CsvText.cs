@@ -72,4 +72,7 @@ public static class CsvText
         Assert.True(row.Count == 0 && cell.Length == 0, "the last row must end with CRLF");
         return rows;
     }
+
+    /// <summary>A text cell's value as it was before the writer neutralised it: one leading single quote taken off.</summary>
+    public static string Unescape(string cell) => cell.StartsWith('\'') ? cell[1..] : cell;
 }

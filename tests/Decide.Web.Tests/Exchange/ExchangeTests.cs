@@ -162,6 +162,33 @@ public sealed class ExchangeTests(DecideWebFactory factory) : IClassFixture<Deci
     }
 
     [Fact]
+    public async Task Results_csv_writes_bidder_names_that_are_formulas_or_markup_as_text_that_reads_back_exactly()
+    {
+        // Formula prefixes from OWASP's "CSV Injection" page, NUL from OWASP ASVS 5.0 (1.2.10), markup, and a name
+        // that starts with the escape character itself.
+        string[] names = ["=HYPERLINK(\"http://example.invalid\",\"Click\")", "+cmd|' /C calc'!A0", "-2+3 Ltd", "@SUM(1+1)", "\t=1+1", "'Ohana; =1+1 <script>alert(1)</script>"];
+        var id = await EvaluationCopies.ImportDemoCopyAsync(factory, file =>
+        {
+            var bids = file["alternatives"]!.AsArray();
+            for (var i = 0; i < bids.Count; i++)
+            {
+                bids[i]!["name"] = names[i % names.Length];
+            }
+        });
+        await EvaluationCopies.SetUpAsync(factory, id, 1, [DecideWebFactory.Approver]);
+        await EvaluationCopies.OpenScoringAsync(factory, id);
+        await EvaluationCopies.SubmitAllSheetsAsync(factory, id);
+        await EvaluationCopies.StartModerationAsync(factory, id);
+        using var client = await factory.SignInAsync(EvaluationCopies.CopyFacilitator);
+
+        var rows = CsvText.Parse(await (await client.GetAsync($"/api/evaluations/{id}/export/results.csv")).Content.ReadAsStringAsync());
+
+        var named = rows.Skip(1).Select(r => r[2]).ToArray();
+        Assert.Equal(names.OrderBy(n => n, StringComparer.Ordinal), named.Select(CsvText.Unescape).Distinct().OrderBy(n => n, StringComparer.Ordinal));
+        Assert.DoesNotContain(rows.SelectMany(r => r), cell => cell.Length > 0 && cell[0] is '=' or '+' or '-' or '@' or '\t' or '\r' or '\0');
+    }
+
+    [Fact]
     public async Task Results_csv_is_refused_before_moderation_like_the_results()
     {
         var id = await EvaluationCopies.ImportDemoCopyAsync(factory);

@@ -62,6 +62,22 @@ public class DecideWebFactory : WebApplicationFactory<Program>, IDecideHost
     /// </summary>
     protected virtual bool SecurityAsDeployed => false;
 
+    /// <summary>
+    /// A service of its own with its own database, served by Kestrel on a loopback port: the server's own limits
+    /// (request body sizes) apply as in production, which the in-memory test server does not enforce.
+    /// </summary>
+    public static DecideWebFactory OnKestrel() => new(onKestrel: true);
+
+    // Not public: a class fixture may have one public constructor only.
+    private DecideWebFactory(bool onKestrel)
+    {
+        if (onKestrel)
+        {
+            UseKestrel(o => o.Listen(System.Net.IPAddress.Loopback, 0));
+            StartServer();
+        }
+    }
+
     /// <summary>"Sqlite" or "Postgres": the provider these tests run against.</summary>
     public static string Provider => PostgresServer is null ? "Sqlite" : "Postgres";
 

@@ -19,7 +19,7 @@ public static class SignInEndpoints
 
     public static IEndpointRouteBuilder MapSignInEndpoints(this IEndpointRouteBuilder app)
     {
-        var account = app.MapGroup("/account").ExcludeFromDescription();
+        var account = app.MapGroup("/account").ExcludeFromDescription().WithMetadata(new RequestSizeLimitAttribute(RequestLimits.MaxFormBytes));
         account.MapPost("/signin", (Delegate)SignIn).AllowAnonymous().WithSignInLimits(returnsToForm: true)
             .WithSummary("Sign in from the sign-in screen; redirects to the return address, or back to the screen with the reason.");
         account.MapPost("/signout", (Delegate)SignOut).AllowAnonymous().RequireAntiforgeryToken()

@@ -1,3 +1,4 @@
+using System.Runtime.InteropServices;
 using System.Security.Cryptography;
 using System.Text;
 using System.Text.Json;
@@ -150,8 +151,9 @@ public sealed class EvaluationService(
                 throw DomainProblem.Invalid("plan", "the plan must be a decide-evaluation/1 object");
             }
 
-            var json = request.Plan.GetRawText();
-            var plan = ReadPlanOrThrow(json);
+            // The body's own bytes: they may hold text that is not UTF-8, which the reader refuses by its path
+            // (GetRawText would throw on it instead).
+            var plan = ReadPlanOrThrow(JsonMarshal.GetRawUtf8Value(request.Plan).ToArray());
             if (request.Settings is { } s)
             {
                 ValidateSettings(s);
@@ -551,7 +553,7 @@ public sealed class EvaluationService(
             return new TransitionResult(Summarise(m.Evaluation, m.Roles), warnings);
         }, ct);
 
-    private static EvaluationFile ReadPlanOrThrow(string json)
+    private static EvaluationFile ReadPlanOrThrow(byte[] json)
     {
         try
         {

@@ -1,3 +1,4 @@
+using System.Runtime.InteropServices;
 using System.Security.Cryptography;
 using System.Text;
 using System.Text.Json;
@@ -103,7 +104,9 @@ public sealed partial class ExchangeService(
             throw DomainProblem.Invalid("file", "give the decide-evaluation/1 file as a JSON object");
         }
 
-        var raw = request.File.GetRawText();
+        // The body's own bytes: they may hold text that is not UTF-8, which the reader refuses by its path
+        // (GetRawText would throw on it instead).
+        var raw = JsonMarshal.GetRawUtf8Value(request.File).ToArray();
         EvaluationFile file;
         try
         {
@@ -174,7 +177,7 @@ public sealed partial class ExchangeService(
 
             var stored = EvaluationImporter.Add(db, file, accounts, facilitator!.Id, user.Id, clock.GetUtcNow());
             audit.Record(db, stored.Id, new AuditEvent("evaluation.imported", $"evaluations/{stored.Id}", null,
-                $"{stored.Reference} · {stored.Title}; facilitator {facilitator.Email}; assessors {string.Join(", ", given.Select(x => $"{x.Key}={x.Value.Trim()}"))}; file sha256 {Sha256(Encoding.UTF8.GetBytes(raw))}"));
+                $"{stored.Reference} · {stored.Title}; facilitator {facilitator.Email}; assessors {string.Join(", ", given.Select(x => $"{x.Key}={x.Value.Trim()}"))}; file sha256 {Sha256(raw)}"));
             await db.SaveChangesAsync(ct);
             return EvaluationService.Summarise(stored, [.. stored.Panel.Where(p => p.UserId == user.Id).Select(p => p.Role)]);
         }, ct);

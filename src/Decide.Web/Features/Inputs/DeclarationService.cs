@@ -20,6 +20,9 @@ public sealed class DeclarationService(
     AuditWriter audit,
     TimeProvider clock)
 {
+    /// <summary>Longest statement of an interest, in characters.</summary>
+    public const int MaxStatementLength = 4000;
+
     private static readonly EvaluationStage[] NamesKnown =
         [EvaluationStage.Scoring, EvaluationStage.Moderation, EvaluationStage.SignedOff, EvaluationStage.Superseded];
 
@@ -183,9 +186,9 @@ public sealed class DeclarationService(
             errors[$"{prefix}alternative"] = [$"a conflict of interest with \"{code}\" is already declared"];
         }
 
-        if (string.IsNullOrWhiteSpace(c.Statement) || c.Statement.Trim().Length < 10 || c.Statement.Length > 4000)
+        if (string.IsNullOrWhiteSpace(c.Statement) || c.Statement.Trim().Length < 10 || c.Statement.Length > MaxStatementLength)
         {
-            errors[$"{prefix}statement"] = ["say what the interest is (10 to 4000 characters); it becomes part of the record"];
+            errors[$"{prefix}statement"] = [$"say what the interest is (10 to {MaxStatementLength} characters); it becomes part of the record"];
         }
     }
 

@@ -19,6 +19,9 @@ public sealed class RatingSheetService(
     AuditWriter audit,
     TimeProvider clock)
 {
+    /// <summary>Longest rationale or reason for declining a cell, in characters.</summary>
+    public const int MaxTextLength = 4000;
+
     private static readonly EvaluationStage[] SheetStages =
         [EvaluationStage.Scoring, EvaluationStage.Moderation, EvaluationStage.SignedOff, EvaluationStage.Superseded];
 
@@ -163,9 +166,9 @@ public sealed class RatingSheetService(
                 errors["rationale"] = ["a declined cell carries its reason under \"declined\"; leave the rationale out"];
             }
 
-            if (string.IsNullOrWhiteSpace(r.Declined) || r.Declined.Length > 4000)
+            if (string.IsNullOrWhiteSpace(r.Declined) || r.Declined.Length > MaxTextLength)
             {
-                errors["declined"] = ["say why you decline to rate this cell (for example: outside my expertise); up to 4000 characters"];
+                errors["declined"] = [$"say why you decline to rate this cell (for example: outside my expertise); up to {MaxTextLength} characters"];
             }
         }
         else
@@ -184,9 +187,9 @@ public sealed class RatingSheetService(
             {
                 errors["rationale"] = [$"give a rationale of at least {Math.Max(1, minimum)} characters that cites the bid's content (got {rationale.Length})"];
             }
-            else if (rationale.Length > 4000)
+            else if (rationale.Length > MaxTextLength)
             {
-                errors["rationale"] = ["a rationale is at most 4000 characters"];
+                errors["rationale"] = [$"a rationale is at most {MaxTextLength} characters"];
             }
             else if (Restates(c, rationale))
             {

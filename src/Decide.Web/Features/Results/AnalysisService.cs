@@ -10,7 +10,7 @@ namespace Decide.Web.Features.Results;
 /// </summary>
 public sealed class AnalysisService(CurrentUser user)
 {
-    /// <summary>Reads the whole body (at most <see cref="ApiSetup.MaxRequestBytes"/>) and analyses it.</summary>
+    /// <summary>Reads the whole body (at most <see cref="RequestLimits.MaxRequestBodyBytes"/>, whatever the server) and analyses it.</summary>
     /// <exception cref="Decide.Core.InvalidEvaluationException">The file is not valid; every problem by JSON path.</exception>
     public async Task<ResultsJson> AnalyseAsync(Stream body, RobustnessOptions options, CancellationToken ct = default)
     {
@@ -20,10 +20,10 @@ public sealed class AnalysisService(CurrentUser user)
         int read;
         while ((read = await body.ReadAsync(chunk, ct)) > 0)
         {
-            if (buffer.Length + read > ApiSetup.MaxRequestBytes)
+            if (buffer.Length + read > RequestLimits.MaxRequestBodyBytes)
             {
                 throw new DomainProblem(StatusCodes.Status413PayloadTooLarge, "File too large",
-                    $"The evaluation file is larger than {ApiSetup.MaxRequestBytes / (1024 * 1024)} MiB.");
+                    $"The evaluation file is larger than the limit of {RequestLimits.Describe(RequestLimits.MaxRequestBodyBytes)}.");
             }
 
             buffer.Write(chunk, 0, read);
