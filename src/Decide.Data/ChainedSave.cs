@@ -11,7 +11,8 @@ namespace Decide.Data;
 /// locked, its last entry read, the new entries chained after it and everything saved, in one transaction.
 /// <list type="bullet">
 /// <item>PostgreSQL: a transaction-scoped advisory lock per chain, so writers on different evaluations do not wait
-/// for each other and instances of the service on other machines queue on the same lock.</item>
+/// for each other and instances of the service on other machines queue on the same lock. Within one instance,
+/// writers on a chain queue in process first, so that a waiting save holds no database connection.</item>
 /// <item>SQLite: one writer at a time per database file anyway; writers queue on an in-process gate (asynchronously,
 /// instead of polling the file lock), and the transaction is SQLite's immediate one, which also holds off any
 /// other process.</item>
@@ -22,25 +23,35 @@ internal static class ChainedSave
     private const string SqliteProvider = "Microsoft.EntityFrameworkCore.Sqlite";
     private const string PostgresProvider = "Npgsql.EntityFrameworkCore.PostgreSQL";
 
-    private static readonly ConcurrentDictionary<string, SemaphoreSlim> SqliteWriters = new(StringComparer.Ordinal);
+    private static readonly ConcurrentDictionary<string, SemaphoreSlim> Gates = new(StringComparer.Ordinal);
 
     public static async Task<int> SaveAsync(
         DecideDbContext db, IReadOnlyList<AuditEntry> added, Func<bool, CancellationToken, Task<int>> save, bool acceptAll, CancellationToken ct)
     {
-        if (db.Database.ProviderName != SqliteProvider)
-        {
-            return await SaveChainedAsync(db, added, save, acceptAll, ct);
-        }
-
-        var gate = SqliteWriters.GetOrAdd(db.Database.GetConnectionString() ?? "", _ => new SemaphoreSlim(1, 1));
-        await gate.WaitAsync(ct);
+        // Writers of this process queue here first, holding no connection while they wait: SQLite per file (one
+        // writer at a time anyway), PostgreSQL per chain (the advisory lock then orders the instances).
+        var database = db.Database.GetConnectionString() ?? "";
+        var keys = db.Database.ProviderName == SqliteProvider
+            ? [database]
+            : added.Select(e => database + "|" + e.Chain).Distinct().Order(StringComparer.Ordinal).ToArray();
+        var held = new List<SemaphoreSlim>(keys.Length);
         try
         {
+            foreach (var key in keys)
+            {
+                var gate = Gates.GetOrAdd(key, _ => new SemaphoreSlim(1, 1));
+                await gate.WaitAsync(ct);
+                held.Add(gate);
+            }
+
             return await SaveChainedAsync(db, added, save, acceptAll, ct);
         }
         finally
         {
-            gate.Release();
+            foreach (var gate in held)
+            {
+                gate.Release();
+            }
         }
     }
 
