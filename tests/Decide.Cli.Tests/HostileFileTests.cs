@@ -62,5 +62,24 @@ public sealed class HostileFileTests : IDisposable
             $"not a PATH: reason line: {Shorten(line)}\n{context}"));
     }
 
+    // Before the reader refused text it cannot decode, such a file ended in exit 1, "internal error: Cannot transcode
+    // invalid UTF-8 JSON text to UTF-16 string" (shrunk from the reader's own property).
+    [Fact]
+    public void A_file_with_bytes_that_are_not_utf8_in_a_name_exits_2_naming_the_place()
+    {
+        var text = File.ReadAllBytes(RepositoryFiles.MinimalExample);
+        var name = "\"Birch Cleaning Co-operative\""u8.ToArray();
+        var at = text.AsSpan().IndexOf(name);
+        var file = Path.Combine(_folder, "not-utf8.json");
+        File.WriteAllBytes(file, [.. text[..at], .. "\"Birch "u8, 0xC3, 0x28, (byte)'"', .. text[(at + name.Length)..]]);
+
+        var run = CliRun.Of("analyse", file, "--no-robustness");
+
+        Assert.Equal(ExitCodes.InvalidInput, run.ExitCode);
+        var line = Assert.Single(run.StderrLines);
+        Assert.StartsWith("$.alternatives[1].name: ", line, StringComparison.Ordinal);
+        Assert.Contains("not UTF-8", line, StringComparison.Ordinal);
+    }
+
     private static string Shorten(string text) => Mutator.Escape(text.Length <= 600 ? text : text[..600] + "…");
 }

@@ -45,7 +45,13 @@ public sealed record HostileCase(
         var steps = new List<string> { $"document {Document % documents.Count}" };
         foreach (var mutation in Mutations)
         {
+            var before = root.Clone();
             (root, var step) = Mutator.Apply(root, mutation);
+            if (JsonTree.Size(root) > HostileValues.MaxDocumentBytes)
+            {
+                (root, step) = (before, step + " (undone: over the size budget)");
+            }
+
             steps.Add(step);
         }
 

@@ -46,6 +46,13 @@ public static class HostileValues
         [(byte)'{', (byte)'}'], [(byte)'/', (byte)'/', (byte)'x'], [(byte)'/', (byte)'*'], "\u2028"u8.ToArray(), [0x1A],
     ];
 
+    /// <summary>
+    /// The most a mutated document may weigh (12 MiB): past the service's 10 MiB body limit, so that refusals for
+    /// size are exercised too, but far from what would exhaust the test's memory. A mutation that would make the
+    /// document heavier is undone (a 2 MB id copied into 200 new criteria once made 400 MB).
+    /// </summary>
+    public const long MaxDocumentBytes = 12 * 1024 * 1024;
+
     /// <summary>Lengths of long strings: past the service's field limits, past 64 KiB, and a million characters.</summary>
     public static readonly int[] Lengths = [301, 4001, 65_537, 1_000_000];
 

@@ -75,6 +75,70 @@ public static class JsonTree
         }
     }
 
+    /// <summary>The number of bytes <see cref="Write(TreeNode)"/> would give, without writing them.</summary>
+    public static long Size(TreeNode node)
+    {
+        long size = 0;
+        var stack = new Stack<TreeNode>();
+        stack.Push(node);
+        while (stack.Count > 0)
+        {
+            switch (stack.Pop())
+            {
+                case TreeObject o:
+                    size += 2 + Math.Max(0, o.Members.Count - 1);
+                    foreach (var m in o.Members)
+                    {
+                        size += StringSize(m.Key) + 1;
+                        stack.Push(m.Value);
+                    }
+
+                    break;
+                case TreeArray a:
+                    size += 2 + Math.Max(0, a.Items.Count - 1);
+                    a.Items.ForEach(stack.Push);
+                    break;
+                case TreeString s:
+                    size += StringSize(s.Value);
+                    break;
+                case TreeRaw r:
+                    size += r.Bytes.Length;
+                    break;
+            }
+        }
+
+        return size;
+    }
+
+    /// <summary>Bytes of a string as <see cref="WriteString"/> writes it, quotes included.</summary>
+    private static long StringSize(string value)
+    {
+        long size = 2;
+        for (var i = 0; i < value.Length; i++)
+        {
+            var c = value[i];
+            if (char.IsHighSurrogate(c) && i + 1 < value.Length && char.IsLowSurrogate(value[i + 1]))
+            {
+                size += 4;
+                i++;
+            }
+            else
+            {
+                size += c switch
+                {
+                    '"' or '\\' => 2,
+                    < (char)0x20 => 6,
+                    < (char)0x80 => 1,
+                    < (char)0x800 => 2,
+                    _ when char.IsSurrogate(c) => 6,
+                    _ => 3,
+                };
+            }
+        }
+
+        return size;
+    }
+
     /// <summary>A JSON string; an unpaired surrogate becomes its \u escape, so the bytes stay valid UTF-8.</summary>
     private static void WriteString(string value, MemoryStream output)
     {

@@ -70,7 +70,9 @@ public static class Mutator
                 what = Empty(place.Node) ? "emptied" : "not a container";
                 break;
             case TreeMutationKind.Multiply:
-                what = Multiply(place.Node, Pick(HostileValues.Copies, c));
+                // No more copies than fit in the size budget.
+                var copies = (int)Math.Min(Pick(HostileValues.Copies, c), HostileValues.MaxDocumentBytes / Math.Max(1, JsonTree.Size(place.Node)) + 1);
+                what = Multiply(place.Node, copies);
                 break;
             case TreeMutationKind.SwapReference:
                 var strings = all.Select(p => p.Node).OfType<TreeString>().ToList();
@@ -216,7 +218,7 @@ public static class Mutator
             return "$: not widened (no first criterion)";
         }
 
-        var ids = Enumerable.Range(1, count).Select(i => $"{id}-w{i}").ToArray();
+        var ids = Enumerable.Range(1, count).Select(i => $"{(id.Length <= 24 ? id : id[..24])}-w{i}").ToArray();
         foreach (var (newId, i) in ids.Select((x, i) => (x, i)))
         {
             var copy = (TreeObject)first.Clone();

@@ -7,7 +7,8 @@ namespace Decide.Web.Infrastructure;
 /// <summary>
 /// Turns refused requests into RFC 9457 problem details: <see cref="DomainProblem"/> with its status, the engine's
 /// <see cref="InvalidEvaluationException"/> as 400 with every error by JSON path, malformed request bodies as 400,
-/// and anything unexpected as a 500 without internals.
+/// a body over its size limit as 413 naming the limit (<see cref="RequestLimits"/>), and anything unexpected as a
+/// 500 without internals.
 /// </summary>
 public sealed class ProblemHandler(IProblemDetailsService problems, ILogger<ProblemHandler> logger) : IExceptionHandler
 {
