@@ -14,7 +14,7 @@ public sealed class ProblemHandler(IProblemDetailsService problems, ILogger<Prob
 {
     public async ValueTask<bool> TryHandleAsync(HttpContext context, Exception exception, CancellationToken cancellationToken)
     {
-        var problem = TooLarge(exception) ? Build(StatusCodes.Status413PayloadTooLarge, "Request too large",
+        var problem = RequestLimits.IsOverLimit(exception) ? Build(StatusCodes.Status413PayloadTooLarge, "Request too large",
                 $"The request body is larger than the limit of {RequestLimits.Describe(BodyLimit(context))} for this address; nothing was read or saved.", null, null)
             : exception switch
         {
@@ -49,23 +49,6 @@ public sealed class ProblemHandler(IProblemDetailsService problems, ILogger<Prob
         }
 
         return problem;
-    }
-
-    /// <summary>
-    /// The server refused to read more of the body, perhaps wrapped by whoever was reading (the antiforgery check
-    /// reads a form first and reports any failure as a bad token).
-    /// </summary>
-    private static bool TooLarge(Exception? exception)
-    {
-        for (; exception is not null; exception = exception.InnerException)
-        {
-            if (exception is BadHttpRequestException { StatusCode: StatusCodes.Status413PayloadTooLarge })
-            {
-                return true;
-            }
-        }
-
-        return false;
     }
 
     /// <summary>The body limit in force for this request (an endpoint may have its own, see <see cref="RequestLimits"/>).</summary>

@@ -42,4 +42,21 @@ public static class RequestLimits
         >= 1024 => (bytes % 1024 == 0 ? $"{bytes / 1024}" : (bytes / 1024.0).ToString("0.0", System.Globalization.CultureInfo.InvariantCulture)) + " KB",
         _ => $"{bytes} bytes",
     };
+
+    /// <summary>
+    /// True when the server refused to read more of a body than its limit, perhaps wrapped by whoever was reading
+    /// (the antiforgery check reads a form first and reports any failure as its own).
+    /// </summary>
+    public static bool IsOverLimit(Exception? exception)
+    {
+        for (; exception is not null; exception = exception.InnerException)
+        {
+            if (exception is BadHttpRequestException { StatusCode: StatusCodes.Status413PayloadTooLarge })
+            {
+                return true;
+            }
+        }
+
+        return false;
+    }
 }

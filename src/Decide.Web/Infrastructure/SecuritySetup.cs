@@ -95,8 +95,14 @@ public static class SecuritySetup
         app.UseAntiforgery();
         app.Use(async (context, next) =>
         {
-            if (context.Features.Get<IAntiforgeryValidationFeature>() is { IsValid: false })
+            if (context.Features.Get<IAntiforgeryValidationFeature>() is { IsValid: false } failed)
             {
+                if (RequestLimits.IsOverLimit(failed.Error))
+                {
+                    // Not a bad token: the form is over its size limit, which the problem handler words (413).
+                    System.Runtime.ExceptionServices.ExceptionDispatchInfo.Throw(failed.Error!);
+                }
+
                 await RefuseFormAsync(context);
                 return;
             }
