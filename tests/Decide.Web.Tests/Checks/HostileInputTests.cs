@@ -115,6 +115,31 @@ public sealed class HostileInputTests(DecideWebFactory factory) : IClassFixture<
         Assert.Equal(before, await admin.GetStringAsync("/api/evaluations"));
     }
 
+    // Found by FuzzedInputTests on PostgreSQL (which enforces column lengths; SQLite does not): an imported rationale
+    // of 65,537 characters made the save fail (500). Text longer than its column is refused before anything is saved.
+    [Fact]
+    public async Task An_import_with_a_rationale_longer_than_the_store_keeps_is_refused_naming_it_and_stores_nothing()
+    {
+        var file = await EvaluationCopies.ExportDemoAsync(factory);
+        var ratings = file["ratings"]!.AsObject();
+        var (assessor, bids) = (ratings.First().Key, ratings.First().Value!.AsObject());
+        var (bid, cells) = (bids.First().Key, bids.First().Value!.AsObject());
+        var criterion = cells.First().Key;
+        cells[criterion]!["rationale"] = new string('r', 5000);
+        using var admin = await factory.SignInAsync(DecideWebFactory.Admin);
+        var before = await admin.GetStringAsync("/api/evaluations");
+
+        var response = await admin.PostAsync("/api/evaluations/import", JsonContent(new
+        {
+            file, facilitatorEmail = DecideWebFactory.Facilitator, accounts = EvaluationCopies.DemoAccounts(file),
+        }));
+
+        var problem = await AssertProblemAsync(response, "5,000 characters");
+        Assert.Contains("5,000 characters", problem.GetRawText());
+        Assert.Contains($"assessor {assessor}, bid {bid}, criterion {criterion}", problem.GetRawText());
+        Assert.Equal(before, await admin.GetStringAsync("/api/evaluations"));
+    }
+
     // Found by FuzzedInputTests (shrunk): bytes that are not UTF-8 inside the file or the plan passed the request's
     // JSON binding and made the service throw when it took the element's text (500). They are refused by their path.
 
