@@ -65,6 +65,7 @@ public static class EvaluationValidator
                 Add("$.options.divergenceTolerance", $"the divergence tolerance is a number of scale steps, 0 or more; got {e.Options.DivergenceTolerance}");
             }
 
+            GeometricAggregation();
             if (planOnly)
             {
                 return;
@@ -87,6 +88,41 @@ public static class EvaluationValidator
         }
 
         private void Add(string path, string reason) => _found.Add(new EvaluationError(path, reason));
+
+        /// <summary>
+        /// The geometric mean multiplies the assessors' values: on a scale with a term whose lower value is 0, one
+        /// such rating zeroes the panel's lower value (and its middle too when that is 0) whatever everyone else said,
+        /// which is a veto and not an average. Refused by name instead of computed.
+        /// </summary>
+        private void GeometricAggregation()
+        {
+            if (e.Options.Aggregation != AggregationRule.Geometric)
+            {
+                return;
+            }
+
+            var scales = new List<(string Role, Scales.LinguisticScale Scale)>();
+            if (e.Criteria.Any(c => c.Kind == CriterionKind.Linguistic))
+            {
+                scales.Add(("rating scale", e.RatingScale));
+            }
+
+            if (e.Weighting == WeightingMethod.Importance)
+            {
+                scales.Add(("importance scale", e.ImportanceScale));
+            }
+
+            foreach (var (role, scale) in scales)
+            {
+                var zero = scale.Terms.Where(t => t.Value.Lower <= 0).ToArray();
+                if (zero.Length > 0)
+                {
+                    var terms = string.Join(", ", zero.Select(t => $"{t.Code} ({t.Label}) {t.Value}"));
+                    Add("$.options.aggregation",
+                        $"the geometric mean multiplies the assessors' values, so on the {role} one rating of a term whose lowest value is 0 would set the panel's value to 0 whatever the others said; {terms} {(zero.Length == 1 ? "has" : "have")} a value of 0. Use the weighted mean, or a {role} whose terms are all above 0");
+                }
+            }
+        }
 
         private void Structure()
         {

@@ -36,10 +36,14 @@ public enum WeightingMethod
 /// <summary>How the panel's individual TFNs become one.</summary>
 public enum AggregationRule
 {
-    /// <summary>Weighted arithmetic mean, component-wise (Chen 2000, eq. 8).</summary>
+    /// <summary>Weighted arithmetic mean, component-wise (Chen 2000, eqs. 13–14).</summary>
     Mean,
 
-    /// <summary>Weighted geometric mean, component-wise; less pulled by one extreme judgement.</summary>
+    /// <summary>
+    /// Weighted geometric mean, component-wise. It multiplies the assessors' values, so one value of 0 makes the
+    /// panel's value 0 whatever the others said: a veto. The validator therefore refuses it on a scale with a term
+    /// whose lower value is 0 (every built-in rating and importance scale has such terms).
+    /// </summary>
     Geometric,
 }
 

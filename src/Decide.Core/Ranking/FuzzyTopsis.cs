@@ -10,11 +10,15 @@ namespace Decide.Core.Ranking;
 /// </summary>
 /// <remarks>
 /// Chen, C.-T. (2000), "Extensions of the TOPSIS for group decision-making under fuzzy environment", Fuzzy Sets
-/// and Systems 114:1–9. Benefit: r̃ᵢⱼ = (aᵢⱼ/cⱼ*, bᵢⱼ/cⱼ*, cᵢⱼ/cⱼ*), cⱼ* = maxᵢ cᵢⱼ (r̃ = 0 when cⱼ* = 0). Cost:
-/// r̃ᵢⱼ = (aⱼ⁻/cᵢⱼ, aⱼ⁻/bᵢⱼ, aⱼ⁻/aᵢⱼ), aⱼ⁻ = minᵢ aᵢⱼ, which needs every aᵢⱼ &gt; 0 (the validator guarantees it).
-/// ṽᵢⱼ = r̃ᵢⱼ ⊗ w̃ⱼ; d⁺ᵢ = Σⱼ d(ṽᵢⱼ, ṽⱼ*), d⁻ᵢ = Σⱼ d(ṽᵢⱼ, ṽⱼ⁻), CCᵢ = d⁻ᵢ/(d⁺ᵢ + d⁻ᵢ). When d⁺ + d⁻ = 0 (every
-/// alternative identical and crisp under extreme ideal points) CC = 0.5 for all. The tests reproduce the paper's
-/// worked example to the two decimals it prints.
+/// and Systems 114:1–9. Benefit (eq. 15): r̃ᵢⱼ = (aᵢⱼ/cⱼ*, bᵢⱼ/cⱼ*, cᵢⱼ/cⱼ*), cⱼ* = maxᵢ cᵢⱼ (r̃ = 0 when
+/// cⱼ* = 0). Cost (eq. 15): r̃ᵢⱼ = (aⱼ⁻/cᵢⱼ, aⱼ⁻/bᵢⱼ, aⱼ⁻/aᵢⱼ), aⱼ⁻ = minᵢ aᵢⱼ, which needs every aᵢⱼ &gt; 0 (the
+/// validator guarantees it). Weighted (eq. 16): ṽᵢⱼ = r̃ᵢⱼ ⊗ (w̃ⱼ / β), where β is the largest upper value of the
+/// weights when it exceeds 1 and 1 otherwise (<see cref="WeightBound"/>): the paper's unit ideal points (1, 1, 1) and
+/// (0, 0, 0) assume every ṽᵢⱼ lies in [0, 1] (§3, after eq. 16), and without β a weighted value above 1 would move
+/// away from the ideal as it grows, so a dearer copy of a bid could overtake the original. Dividing every weight by
+/// one number leaves the crisp shares unchanged. Distances (eqs. 17–18): d⁺ᵢ = Σⱼ d(ṽᵢⱼ, ṽⱼ*),
+/// d⁻ᵢ = Σⱼ d(ṽᵢⱼ, ṽⱼ⁻); closeness (eq. 19): CCᵢ = d⁻ᵢ/(d⁺ᵢ + d⁻ᵢ). When d⁺ + d⁻ = 0 (every alternative identical
+/// and crisp under extreme ideal points) CC = 0.5 for all.
 /// </remarks>
 public static class FuzzyTopsis
 {
@@ -101,13 +105,17 @@ public static class FuzzyTopsis
         }
     }
 
-    /// <summary>Writes the weighted normalised matrix ṽᵢⱼ = r̃ᵢⱼ ⊗ w̃ⱼ into <paramref name="weighted"/>.</summary>
+    /// <summary>
+    /// Writes the weighted normalised matrix ṽᵢⱼ = r̃ᵢⱼ ⊗ (w̃ⱼ / β) (Chen 2000, eqs. 15–16) into
+    /// <paramref name="weighted"/>; β = <see cref="WeightBound(ReadOnlySpan{Tfn})"/>, so every ṽᵢⱼ lies in [0, 1].
+    /// </summary>
     public static void Normalise(
         ReadOnlySpan<Tfn> matrix, int n, int m, ReadOnlySpan<bool> isCost, ReadOnlySpan<Tfn> weights, Span<Tfn> weighted)
     {
+        var bound = WeightBound(weights);
         for (var j = 0; j < m; j++)
         {
-            var w = weights[j];
+            var w = bound == 1 ? weights[j] : Tfn.Unchecked(weights[j].Lower / bound, weights[j].Middle / bound, weights[j].Upper / bound);
             if (isCost[j])
             {
                 var aMin = double.PositiveInfinity;
@@ -140,6 +148,23 @@ public static class FuzzyTopsis
                 }
             }
         }
+    }
+
+    /// <summary>
+    /// β, the number every weight is divided by before it enters TOPSIS: the largest upper value of
+    /// <paramref name="weights"/> when that exceeds 1, otherwise 1. Normalised ratings lie in [0, 1], so weights
+    /// within [0, 1] keep every weighted value within [0, 1], as the unit ideal points assume (Chen 2000, §3 after
+    /// eq. 16). One divisor for all criteria leaves the crisp shares unchanged.
+    /// </summary>
+    public static double WeightBound(ReadOnlySpan<Tfn> weights)
+    {
+        var largest = 0.0;
+        foreach (var w in weights)
+        {
+            largest = Math.Max(largest, w.Upper);
+        }
+
+        return largest > 1 ? largest : 1;
     }
 
     /// <summary>

@@ -25,17 +25,20 @@ public static class MethodCrossCheck
 
         var otherAggregation = options.Aggregation == AggregationRule.Mean ? AggregationRule.Geometric : AggregationRule.Mean;
         var otherIdeal = options.Ideal == IdealPoints.Unit ? IdealPoints.Extreme : IdealPoints.Unit;
-        var results = new List<MethodComparison>
+        var results = new List<MethodComparison>();
+        var aggregationVariant = prepared.Source with { Options = options with { Aggregation = otherAggregation } };
+        if (EvaluationValidator.Validate(aggregationVariant).Count == 0)
         {
-            Compare(prepared, main, winner, $"aggregation:{Name(otherAggregation)}",
+            results.Add(Compare(prepared, main, winner, $"aggregation:{Name(otherAggregation)}",
                 otherAggregation == AggregationRule.Geometric ? "geometric mean of the assessors' ratings" : "arithmetic mean of the assessors' ratings",
-                TopsisCloseness(prepared.Source with { Options = options with { Aggregation = otherAggregation } }, prepared)),
-            Compare(prepared, main, winner, $"ideal:{Name(otherIdeal)}",
-                otherIdeal == IdealPoints.Extreme ? "ideal points at the best and worst weighted values received" : "ideal points (1,1,1) and (0,0,0)",
-                TopsisCloseness(prepared.Source with { Options = options with { Ideal = otherIdeal } }, prepared)),
-            Compare(prepared, main, winner, "weighted-sum", "fuzzy weighted sum of the normalised ratings, defuzzified by centroid",
-                WeightedSum(prepared)),
-        };
+                TopsisCloseness(aggregationVariant, prepared)));
+        }
+
+        results.Add(Compare(prepared, main, winner, $"ideal:{Name(otherIdeal)}",
+            otherIdeal == IdealPoints.Extreme ? "ideal points at the best and worst weighted values received" : "ideal points (1,1,1) and (0,0,0)",
+            TopsisCloseness(prepared.Source with { Options = options with { Ideal = otherIdeal } }, prepared)));
+        results.Add(Compare(prepared, main, winner, "weighted-sum", "fuzzy weighted sum of the normalised ratings, defuzzified by centroid",
+            WeightedSum(prepared)));
         return results;
     }
 

@@ -3,6 +3,7 @@ using Decide.Core.Analysis;
 using Decide.Core.Consistency;
 using Decide.Core.Fuzzy;
 using Decide.Core.Model;
+using Decide.Core.Ranking;
 
 namespace Decide.Core.Weighting;
 
@@ -20,6 +21,10 @@ namespace Decide.Core.Weighting;
 /// of the panel's matrix (element-wise weighted geometric mean of the assessors' matrices). A matrix of one item
 /// gives it (1, 1, 1).</item>
 /// </list>
+/// Finally, when any weight's upper value exceeds 1, every weight is divided by the largest upper value
+/// (<see cref="FuzzyTopsis.WeightBound"/>): the unit ideal points of fuzzy TOPSIS assume weighted values within
+/// [0, 1] (Chen 2000, §3 after eq. 16). The crisp shares are unchanged; the group and local parts are reported as
+/// derived, so their product is then the reported weight times that divisor.
 /// See docs/methods.md §4 and docs/decisions/0004-criterion-groups.md.
 /// </remarks>
 public static class CriterionWeights
@@ -56,6 +61,17 @@ public static class CriterionWeights
             else
             {
                 fuzzy[j] = node[c.Id];
+            }
+        }
+
+        // Brought within [0, 1] as fuzzy TOPSIS's unit ideal points assume (Buckley upper weights and custom importance
+        // scales can exceed 1); one divisor for all, so the crisp shares are unchanged.
+        var bound = FuzzyTopsis.WeightBound(fuzzy);
+        if (bound > 1)
+        {
+            for (var j = 0; j < fuzzy.Length; j++)
+            {
+                fuzzy[j] = (1 / bound) * fuzzy[j];
             }
         }
 

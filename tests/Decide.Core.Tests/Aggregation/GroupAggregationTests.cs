@@ -37,13 +37,17 @@ public sealed class GroupAggregationTests
     }
 
     [Fact]
-    public void Geometric_mean_is_pulled_less_than_the_mean_by_one_low_judgement()
+    public void One_rating_with_a_zero_lower_value_vetoes_the_geometric_mean()
     {
+        // Two "Good" (7, 9, 10) and one "Poor" (0, 1, 3) on Chen's rating scale: the product of the lower values is 0,
+        // so the panel's lower value is 0 however good the others are, while the mean keeps 14/3. This is why the
+        // validator refuses geometric aggregation on scales with such terms.
         var values = new[] { Good, Good, Poor };
         var mean = GroupAggregation.Aggregate(values, [1, 1, 1], AggregationRule.Mean);
         var geometric = GroupAggregation.Aggregate(values, [1, 1, 1], AggregationRule.Geometric);
-        Assert.True(geometric.Upper < mean.Upper);
-        Assert.Equal(0, geometric.Lower); // a zero lower value makes the geometric lower value zero
+        Assert.Equal(14.0 / 3, mean.Lower, 12);
+        Assert.Equal(0, geometric.Lower);
+        Assert.Equal(Math.Cbrt(81), geometric.Middle, 12); // (9 · 9 · 1)^⅓
     }
 
     [Theory]

@@ -46,9 +46,51 @@ public sealed class GeneratorCoverageTests
         Assert.Contains(criteria, c => c.Kind == CriterionKind.Numeric && c.Direction == Direction.Cost);
         Assert.Contains(Samples, e => e.Criteria.Any(c => c.Kind == CriterionKind.Linguistic) && e.Criteria.Any(c => c.Kind == CriterionKind.Numeric));
         Assert.Contains(Samples, e => e.Ratings.Any(r => r.Declined is not null));
-        Assert.Equal(2, Samples.Select(e => e.Options.Aggregation).Distinct().Count());
+        Assert.All(Samples.Where(e => e.Options.Aggregation == AggregationRule.Geometric), e => Assert.All(e.RatingScale.Terms, t => Assert.True(t.Value.Lower > 0)));
         Assert.Equal(2, Samples.Select(e => e.Options.Ideal).Distinct().Count());
         Assert.Equal(2, Samples.Select(e => e.RatingScale.Name).Distinct().Count());
         Assert.Contains(Samples, e => e.Assessors.Select(a => a.Weight).Distinct().Count() > 1);
+    }
+
+    private static readonly Evaluation[] Panels = Enumerable.Range(0, 500).Select(PanelGenerator.Generate).ToArray();
+
+    [Fact]
+    public void Every_generated_panel_is_valid_and_reproducible()
+    {
+        Assert.All(Panels, e => Assert.Empty(EvaluationValidator.Validate(e)));
+        Assert.Equal(PanelGenerator.Generate(7).Ratings, PanelGenerator.Generate(7).Ratings);
+        Assert.Equal(PanelGenerator.Generate(7).Pairwise, PanelGenerator.Generate(7).Pairwise);
+    }
+
+    [Fact]
+    public void Panels_reach_every_shape_the_format_allows()
+    {
+        Assert.Contains(Panels, e => e.Groups.Count == 2);
+        Assert.Contains(Panels, e => e.Weighting == WeightingMethod.Pairwise && e.Groups.Count > 0);
+        Assert.Contains(Panels, e => e.Weighting == WeightingMethod.Pairwise && e.Pairwise.Select(p => p.Assessor).Distinct().Count() < e.Assessors.Count);
+        Assert.Contains(Panels, e => e.Weighting == WeightingMethod.Importance && e.ImportanceScale == PanelGenerator.WideImportance);
+        Assert.Contains(Panels, e => e.Weighting == WeightingMethod.Importance && e.ImportanceScale == PanelGenerator.PositiveImportance && e.Options.Aggregation == AggregationRule.Geometric);
+        Assert.Contains(Panels, e => e.Options.Aggregation == AggregationRule.Geometric && e.Criteria.Any(c => c.Kind == CriterionKind.Linguistic));
+        Assert.Contains(Panels, e => e.Criteria.Any(c => c.Kind == CriterionKind.Linguistic && c.Direction == Direction.Cost));
+        Assert.Contains(Panels, e => e.Criteria.Any(c => c.Kind == CriterionKind.Numeric && c.Direction == Direction.Cost));
+        Assert.Contains(Panels, e => e.Gates.Any(g => !g.Passed));
+        Assert.Contains(Panels, e => e.Moderated.Count > 0);
+        Assert.Contains(Panels, e => e.Assessors.Any(a => a.Criteria is not null));
+        Assert.Contains(Panels, e => e.Ratings.Any(r => r.Declined is not null));
+        Assert.Equal(2, Panels.Select(e => e.Options.AcceptabilityWeights).Distinct().Count());
+        Assert.Equal(2, Panels.Select(e => e.Options.Ideal).Distinct().Count());
+    }
+
+    [Fact]
+    public void Weights_on_a_scale_reaching_10_are_brought_within_0_and_1_and_keep_their_shares()
+    {
+        // On the [0, 10] importance scale every aggregated weight's upper value is at least 3 before the bound, so the
+        // bound must apply: the largest upper value becomes exactly 1, and the shares are the centroids' shares.
+        var wide = Panels.Where(e => e.Weighting == WeightingMethod.Importance && e.ImportanceScale == PanelGenerator.WideImportance)
+            .Select(DecisionEngine.Prepare).ToArray();
+        Assert.True(wide.Length > 20, $"only {wide.Length} panels use the wide importance scale");
+        Assert.All(wide, p => Assert.Equal(1, p.Weights.Max(w => w.Fuzzy.Upper), 12));
+        Assert.All(wide, p => Assert.All(p.Weights, w => Assert.Equal(w.Fuzzy.Centroid / p.Weights.Sum(x => x.Fuzzy.Centroid), w.Crisp, 12)));
+        Assert.All(Panels.Select(DecisionEngine.Prepare), p => Assert.All(p.Weights, w => Assert.InRange(w.Fuzzy.Upper, 0, 1)));
     }
 }

@@ -13,6 +13,12 @@ public static class DecideArbitraries
             .Select(seed => new GeneratedEvaluation(seed, EvaluationGenerator.Generate(seed)))
             .ToArbitrary();
 
+    /// <summary>Seeds of <see cref="PanelGenerator"/>: evaluations of every shape the format allows.</summary>
+    public static Arbitrary<AnyPanel> AnyPanel() =>
+        Gen.Choose(0, int.MaxValue)
+            .Select(seed => new AnyPanel(seed, PanelGenerator.Generate(seed)))
+            .ToArbitrary();
+
     /// <summary>Seeds over the whole non-negative int range.</summary>
     public static Arbitrary<Seed> Seed() => Gen.Choose(0, int.MaxValue).Select(v => new Seed(v)).ToArbitrary();
 

@@ -6,7 +6,9 @@ namespace Decide.Core.Tests.Support;
 /// <summary>
 /// Builds random valid evaluations from a seed: 2–6 alternatives, 1–6 criteria mixing linguistic benefit and
 /// numeric benefit/cost criteria, 1–5 assessors with random weights, random terms (with the odd declined cell,
-/// never all of a cell), importance weighting, and a random aggregation rule and choice of ideal points.
+/// never all of a cell), importance weighting, and a random choice of ideal points. The aggregation rule is random
+/// where both are allowed: the geometric mean only on scales whose terms all lie above 0, so with the built-in scales
+/// it is always the mean. <see cref="PanelGenerator"/> covers the other shapes of the format.
 /// The same seed always gives the same evaluation.
 /// </summary>
 public static class EvaluationGenerator
@@ -84,10 +86,12 @@ public static class EvaluationGenerator
             Ratings = ratings,
             Values = values,
             Options = new AnalysisOptions(
-                random.Next(2) == 0 ? AggregationRule.Mean : AggregationRule.Geometric,
+                random.Next(2) == 0 || !AboveZero(rating) || !AboveZero(importance) ? AggregationRule.Mean : AggregationRule.Geometric,
                 random.Next(2) == 0 ? IdealPoints.Unit : IdealPoints.Extreme),
         };
     }
+
+    private static bool AboveZero(LinguisticScale scale) => scale.Terms.All(t => t.Value.Lower > 0);
 
     private static T Pick<T>(Random random, params T[] choices) => choices[random.Next(choices.Length)];
 }

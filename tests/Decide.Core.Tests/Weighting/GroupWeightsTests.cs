@@ -60,16 +60,26 @@ public sealed class GroupWeightsTests
         var topWeights = BuckleyWeights.Compute(top);
         var innerWeights = BuckleyWeights.Compute(inner);
 
-        AssertTfn(topWeights[0] * innerWeights[0], weights["QUALITY"].Fuzzy);
-        AssertTfn(topWeights[0] * innerWeights[1], weights["STAFF"].Fuzzy);
-        AssertTfn(topWeights[1], weights["PRICE"].Fuzzy);
+        // Buckley's upper weights exceed 1 here (TECH's is 2/(√2 + ½) ≈ 1.045, QUALITY's local one √3/(1 + 1/√3) ≈ 1.098),
+        // so every global weight is divided by the largest upper value, β = QUALITY's, as fuzzy TOPSIS's unit ideal
+        // points need (Chen 2000, §3 after eq. 16); the crisp shares are those of the undivided weights.
+        Tfn quality = topWeights[0] * innerWeights[0], staff = topWeights[0] * innerWeights[1], price = topWeights[1];
+        var beta = quality.Upper;
+        Assert.True(beta > 1.1, $"β = {beta}");
+        AssertTfn((1 / beta) * quality, weights["QUALITY"].Fuzzy);
+        AssertTfn((1 / beta) * staff, weights["STAFF"].Fuzzy);
+        AssertTfn((1 / beta) * price, weights["PRICE"].Fuzzy);
+        Assert.Equal(1, weights.Values.Max(w => w.Fuzzy.Upper), 1e-12);
         AssertTfn(topWeights[0], weights["STAFF"].GroupWeight!.Value);
         AssertTfn(innerWeights[1], weights["STAFF"].Local!.Value);
 
-        // Middles: TECH ¾ · (QUALITY ⅔, STAFF ⅓), PRICE ¼.
-        Assert.Equal(0.5, weights["QUALITY"].Fuzzy.Middle, 1e-12);
-        Assert.Equal(0.25, weights["STAFF"].Fuzzy.Middle, 1e-12);
-        Assert.Equal(0.25, weights["PRICE"].Fuzzy.Middle, 1e-12);
+        // Middles before the division: TECH ¾ · (QUALITY ⅔, STAFF ⅓), PRICE ¼.
+        Assert.Equal(0.5 / beta, weights["QUALITY"].Fuzzy.Middle, 1e-12);
+        Assert.Equal(0.25 / beta, weights["STAFF"].Fuzzy.Middle, 1e-12);
+        Assert.Equal(0.25 / beta, weights["PRICE"].Fuzzy.Middle, 1e-12);
+        var centroids = quality.Centroid + staff.Centroid + price.Centroid;
+        Assert.Equal(quality.Centroid / centroids, weights["QUALITY"].Crisp, 1e-12);
+        Assert.Equal(price.Centroid / centroids, weights["PRICE"].Crisp, 1e-12);
         Assert.Equal(1, weights.Values.Sum(w => w.Crisp), 1e-12);
 
         // One report per matrix for D1 and one for the panel, the group's matrix named by its group.
