@@ -54,7 +54,7 @@ public sealed class RoundTripTests
             Importance = [.. from c in new[] { "C1", "C2" } from d in new[] { "D1", "D2" } select new ImportanceRating(d, c, "MH")],
             Ratings = [.. from c in new[] { "C1", "C2" } from a in new[] { "A1", "A2" } from d in new[] { "D1", "D2" }
                 select new Rating(d, a, c, a == "A1" ? "G" : "F", c == "C2" ? "See notes, \"p. 4\"" : null)],
-            Options = new AnalysisOptions(AggregationRule.Geometric, IdealPoints.Extreme),
+            Options = new AnalysisOptions(AggregationRule.Mean, IdealPoints.Extreme, DivergenceTolerance: 3),
         };
 
         var again = EvaluationFileReader.Read(EvaluationFileWriter.ToJson(evaluation));

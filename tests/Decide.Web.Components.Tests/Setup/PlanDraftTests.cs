@@ -32,7 +32,7 @@ public sealed class PlanDraftTests
         draft.NameCriterion(gate, "Safety certificate");
         gate.Kind = CriterionKind.Gate;
         draft.DivergenceTolerance = 1;
-        draft.Aggregation = AggregationRule.Geometric;
+        draft.Ideal = IdealPoints.Extreme;
 
         var read = EvaluationFileReader.ReadPlan(draft.ToJson());
 
@@ -50,7 +50,7 @@ public sealed class PlanDraftTests
         Assert.Equal("suppliers", read.Metadata.Noun);
         Assert.Equal("Shelter lighting for five years.", read.Metadata.Description);
         Assert.Equal(1, plan.Options.DivergenceTolerance);
-        Assert.Equal(AggregationRule.Geometric, plan.Options.Aggregation);
+        Assert.Equal(IdealPoints.Extreme, plan.Options.Ideal);
     }
 
     /// <remarks>The stored descriptors are in scale order, the order the draft writes them in.</remarks>
@@ -144,7 +144,7 @@ public sealed class PlanDraftTests
           ],
           "weighting": "pairwise",
           "pairwiseScale": "pairwise-9",
-          "options": {"aggregation": "geometric", "ideal": "extreme", "divergenceTolerance": 3, "acceptabilityWeights": "uniform"}
+          "options": {"aggregation": "mean", "ideal": "extreme", "divergenceTolerance": 3, "acceptabilityWeights": "uniform"}
         }
         """;
 }
