@@ -19,7 +19,7 @@ internal sealed partial class RecordWriter
         if (sensitivity.Sweeps.Count > 0 && ranking.Count > 1)
         {
             _flow.Heading("Weight sweeps", keepWith: 220);
-            _flow.Paragraph("Closeness of each alternative as one criterion's share of the weight runs from 0% to 100% (the others keep their proportions). Dashed line: the current share. Rings: where two lines cross and the order changes.", _style.Cell, _style.MutedBrush);
+            _flow.Paragraph("Closeness of each alternative as one criterion's share of the weight runs from 0% to 100% (the others keep their proportions). Dashed line: the current share. Rings: where two lines cross and the order changes. All lines fall towards the right because the other criteria's weights shrink towards 0 there, and a criterion of weight 0 leaves every bid as far from the ideal on it as it can be; only the order of the lines ranks.", _style.Cell, _style.MutedBrush);
             var legendArea = new XRect(_flow.Left, _flow.Y, _flow.Width, 40);
             _flow.Y += ChartPainter.Legend(_flow.Gfx, legendArea, ranking.Select(r => (_names.Alternative(r.Alternative), colours[r.Alternative])).ToArray(), _style) + 4;
             const double chartHeight = 150;
