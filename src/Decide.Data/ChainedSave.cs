@@ -20,9 +20,6 @@ namespace Decide.Data;
 /// </summary>
 internal static class ChainedSave
 {
-    private const string SqliteProvider = "Microsoft.EntityFrameworkCore.Sqlite";
-    private const string PostgresProvider = "Npgsql.EntityFrameworkCore.PostgreSQL";
-
     private static readonly ConcurrentDictionary<string, SemaphoreSlim> Gates = new(StringComparer.Ordinal);
 
     public static async Task<int> SaveAsync(
@@ -31,7 +28,7 @@ internal static class ChainedSave
         // Writers of this process queue here first, holding no connection while they wait: SQLite per file (one
         // writer at a time anyway), PostgreSQL per chain (the advisory lock then orders the instances).
         var database = db.Database.GetConnectionString() ?? "";
-        var keys = db.Database.ProviderName == SqliteProvider
+        var keys = db.Database.IsSqlite()
             ? [database]
             : added.Select(e => database + "|" + e.Chain).Distinct().Order(StringComparer.Ordinal).ToArray();
         var held = new List<SemaphoreSlim>(keys.Length);
@@ -92,7 +89,7 @@ internal static class ChainedSave
 
     private static async Task LockChainsAsync(DecideDbContext db, IReadOnlyList<AuditEntry> added, CancellationToken ct)
     {
-        if (db.Database.ProviderName != PostgresProvider)
+        if (!db.Database.IsNpgsql())
         {
             return;
         }

@@ -1,4 +1,5 @@
 using Decide.Data.Entities;
+using Decide.Data.Storage;
 using Microsoft.AspNetCore.DataProtection.EntityFrameworkCore;
 using Microsoft.AspNetCore.Identity.EntityFrameworkCore;
 using Microsoft.EntityFrameworkCore;
@@ -44,11 +45,12 @@ public sealed class DecideDbContext(DbContextOptions<DecideDbContext> options)
     public DbSet<DataProtectionKey> DataProtectionKeys => Set<DataProtectionKey>();
 
     /// <summary>
-    /// Saves, chaining any new audit entries after the last entry of their chain under the chain's lock (see
-    /// <see cref="ChainedSave"/>).
+    /// Saves, after refusing any text longer than its column (<see cref="TextLimits"/>), chaining any new audit entries
+    /// after the last entry of their chain under the chain's lock (see <see cref="ChainedSave"/>).
     /// </summary>
     public override Task<int> SaveChangesAsync(bool acceptAllChangesOnSuccess, CancellationToken cancellationToken = default)
     {
+        TextLimits.RequireWithin(this);
         var added = appended.Where(e => Entry(e).State == EntityState.Added).ToList();
         return ChainedSave.SaveAsync(this, added, base.SaveChangesAsync, acceptAllChangesOnSuccess, cancellationToken);
     }
@@ -56,6 +58,7 @@ public sealed class DecideDbContext(DbContextOptions<DecideDbContext> options)
     /// <summary>Synchronous saves cannot take the chain's lock; audit entries must be saved with <see cref="SaveChangesAsync(bool, CancellationToken)"/>.</summary>
     public override int SaveChanges(bool acceptAllChangesOnSuccess)
     {
+        TextLimits.RequireWithin(this);
         if (appended.Any(e => Entry(e).State == EntityState.Added))
         {
             throw new InvalidOperationException("Audit entries are chained under a lock and must be saved with SaveChangesAsync.");

@@ -1,6 +1,6 @@
 namespace Decide.Data.Entities;
 
-/// <summary>Where an evaluation is in its life. Transitions only go forward (see Features/Lifecycle).</summary>
+/// <summary>Where an evaluation is in its life. Transitions only go forward (the rules: Decide.Web, Features/Evaluations/EvaluationService).</summary>
 public enum EvaluationStage
 {
     /// <summary>The facilitator prepares the plan; weight judgements are collected.</summary>

@@ -18,7 +18,7 @@ public static class ApiSetup
 {
     public static WebApplicationBuilder AddDecideApi(this WebApplicationBuilder builder)
     {
-        builder.Services.AddSingleton(builder.Configuration.GetSection(SigningOptions.Section).Get<SigningOptions>() ?? new SigningOptions());
+        builder.Services.AddSingleton(SigningOptions.Read(builder.Configuration, builder.Environment.ContentRootPath));
         // Refusals made by the framework (no token, wrong content type, body too large) carry no detail of their
         // own; give each a sentence so that every problem document says what to do.
         builder.Services.AddProblemDetails(o => o.CustomizeProblemDetails = c => c.ProblemDetails.Detail ??= c.ProblemDetails.Status switch

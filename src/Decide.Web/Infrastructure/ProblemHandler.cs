@@ -1,4 +1,5 @@
 using Decide.Core;
+using Decide.Data.Storage;
 using Microsoft.AspNetCore.Diagnostics;
 using Microsoft.AspNetCore.Mvc;
 
@@ -7,7 +8,8 @@ namespace Decide.Web.Infrastructure;
 /// <summary>
 /// Turns refused requests into RFC 9457 problem details: <see cref="DomainProblem"/> with its status, the engine's
 /// <see cref="InvalidEvaluationException"/> as 400 with every error by JSON path, malformed request bodies as 400,
-/// a body over its size limit as 413 naming the limit (<see cref="RequestLimits"/>), and anything unexpected as a
+/// a text longer than its column as 400 naming it (<see cref="TextTooLongException"/>), a body over its size limit as
+/// 413 naming the limit (<see cref="RequestLimits"/>), and anything unexpected as a
 /// 500 without internals.
 /// </summary>
 public sealed class ProblemHandler(IProblemDetailsService problems, ILogger<ProblemHandler> logger) : IExceptionHandler
@@ -19,6 +21,7 @@ public sealed class ProblemHandler(IProblemDetailsService problems, ILogger<Prob
             : exception switch
         {
             DomainProblem p => Build(p.Status, p.Title, p.Detail, p.Errors, p.Extensions),
+            TextTooLongException t => Build(StatusCodes.Status400BadRequest, "Text too long", t.Message, t.Errors, null),
             InvalidEvaluationException e => Build(StatusCodes.Status400BadRequest, "Invalid evaluation",
                 $"{e.Errors.Count} problem(s); the first: {e.Errors[0]}",
                 e.Errors.GroupBy(x => x.Path).ToDictionary(g => g.Key, g => g.Select(x => x.Reason).ToArray()), null),

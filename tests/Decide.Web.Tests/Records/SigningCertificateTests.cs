@@ -1,3 +1,4 @@
+using Decide.Data.Storage;
 using Decide.Web.Features.Records;
 using Decide.Web.Infrastructure;
 using Microsoft.AspNetCore.DataProtection;

@@ -1,4 +1,5 @@
 using Decide.Core;
+using Decide.Data.Storage;
 using Decide.Web.Infrastructure;
 
 namespace Decide.Web.Components.Shared;
@@ -13,6 +14,7 @@ public sealed record ProblemText(string Title, string Detail, IReadOnlyDictionar
     public static ProblemText? From(Exception exception) => exception switch
     {
         DomainProblem p => new ProblemText(p.Title, p.Detail, p.Errors ?? new Dictionary<string, string[]>()),
+        TextTooLongException t => new ProblemText("Text too long", t.Message, t.Errors),
         InvalidEvaluationException e => new ProblemText("The evaluation has problems",
             $"{e.Errors.Count} problem(s) must be fixed before the engine can analyse it.",
             e.Errors.GroupBy(x => x.Path).ToDictionary(g => g.Key, g => g.Select(x => x.Reason).ToArray())),

@@ -1,6 +1,7 @@
 using Decide.Core.Model;
 using Decide.Data;
 using Decide.Data.Entities;
+using Decide.Data.Storage;
 using Decide.Web.Infrastructure;
 using Microsoft.EntityFrameworkCore;
 

@@ -12,6 +12,7 @@ using Decide.Reports.Signing;
 using Decide.Reports.Verification;
 using Decide.Web.Features.Audit;
 using Decide.Web.Features.Evaluations;
+using Decide.Data.Storage;
 using Decide.Web.Infrastructure;
 using Microsoft.EntityFrameworkCore;
 using ReportApproval = Decide.Reports.Content.Approval;

@@ -1,6 +1,7 @@
 using System.Security.Cryptography;
 using System.Security.Cryptography.X509Certificates;
 using Decide.Reports.Signing;
+using Decide.Data.Storage;
 using Decide.Web.Infrastructure;
 using Microsoft.AspNetCore.DataProtection;
 
@@ -16,6 +17,23 @@ public sealed class SigningOptions
 
     /// <summary>The PFX's password; give it through a secret store or the environment (Signing__CertificatePassword), never in a file in the repository.</summary>
     public string? CertificatePassword { get; set; }
+
+    /// <summary>
+    /// Reads the section at start and refuses, naming the setting, a certificate file that is not there: the
+    /// mistake shows when the service starts, not when the first record is signed.
+    /// </summary>
+    /// <exception cref="InvalidOperationException">Signing:CertificatePath names no file.</exception>
+    public static SigningOptions Read(IConfiguration configuration, string contentRoot)
+    {
+        var options = configuration.GetSection(Section).Get<SigningOptions>() ?? new SigningOptions();
+        if (!string.IsNullOrWhiteSpace(options.CertificatePath) && !File.Exists(Path.GetFullPath(options.CertificatePath, contentRoot)))
+        {
+            throw new InvalidOperationException(
+                $"Signing:CertificatePath '{Path.GetFullPath(options.CertificatePath, contentRoot)}' does not exist; give the path of a PFX file with the signing certificate and its private key, or leave the setting out to sign with the service's own certificate.");
+        }
+
+        return options;
+    }
 }
 
 /// <summary>
