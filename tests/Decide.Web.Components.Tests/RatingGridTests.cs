@@ -212,6 +212,42 @@ public sealed class RatingGridTests : MudComponentTest
         Assert.Equal(0, _submits);
     }
 
+    [Fact]
+    public void A_change_made_while_the_cell_is_saving_is_sent_once_after_it_with_the_new_version()
+    {
+        // The first save stays on its way until released; two more changes arrive meanwhile.
+        var release = new TaskCompletionSource();
+        var sends = new List<RatingRequest>();
+        var cut = Render<RatingGrid>(p => p
+            .Add(x => x.Sheet, Sheet(rated: ("eastfold", "staffing", "F", Rationale, 3)))
+            .Add(x => x.OnSave, async (cell, request) =>
+            {
+                sends.Add(request);
+                if (sends.Count == 1)
+                {
+                    await release.Task;
+                }
+
+                return _answer(cell, request);
+            })
+            .Add(x => x.OnSubmit, () => Task.FromResult<ProblemText?>(null))
+            .Add(x => x.AutosaveDelay, TimeSpan.Zero));
+
+        Cell(cut, "eastfold/staffing").Focus();
+        Cell(cut, "eastfold/staffing").KeyDown(new KeyboardEventArgs { Key = "G" });
+        Assert.Equal("saving", Cell(cut, "eastfold/staffing").GetAttribute("data-state"));
+        Cell(cut, "eastfold/staffing").KeyDown(new KeyboardEventArgs { Key = "V" });
+        Cell(cut, "eastfold/staffing").KeyDown(new KeyboardEventArgs { Key = "G" });
+        Assert.Single(sends);
+
+        cut.InvokeAsync(release.SetResult);
+        cut.WaitForAssertion(() => Assert.Equal("saved", Cell(cut, "eastfold/staffing").GetAttribute("data-state")));
+
+        // Two saves in all: the first as typed, the second with the latest term against the version the first stored.
+        Assert.Equal([new RatingRequest("G", Rationale, null, 3), new RatingRequest("VG", Rationale, null, 4)], sends);
+        Assert.Contains("VG", Cell(cut, "eastfold/staffing").TextContent);
+    }
+
     private static readonly string[] ChenCodes = BuiltInScales.ChenRating7.Terms.Select(t => t.Code).ToArray();
 
     private IRenderedComponent<RatingGrid> RenderGrid(RatingSheetView sheet) =>

@@ -67,6 +67,22 @@ public sealed class CellDraft(SheetCell stored, int minimumRationale)
         : !RationaleLongEnough ? $"add a rationale of at least {Minimum} characters (Enter opens it)"
         : null;
 
+    /// <summary>
+    /// The one place the cell's shown state follows from its contents when no save is on its way: saved when it shows
+    /// what is stored, otherwise a draft with the reason it cannot be saved yet (if any). A cell changed elsewhere
+    /// stays stale until the assessor chooses.
+    /// </summary>
+    public void Settle()
+    {
+        if (State is CellState.Stale)
+        {
+            return;
+        }
+
+        State = Changed ? CellState.Draft : CellState.Saved;
+        Message = NotSavableReason();
+    }
+
     /// <summary>Takes what the service stored as the new baseline, keeping anything typed since the save was sent.</summary>
     public void Accept(SheetCell saved, RatingRequest sent)
     {

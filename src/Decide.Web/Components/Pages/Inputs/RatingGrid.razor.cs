@@ -16,8 +16,7 @@ namespace Decide.Web.Components.Pages.Inputs;
 public partial class RatingGrid : IAsyncDisposable
 {
     private readonly Dictionary<string, CancellationTokenSource> _timers = new(StringComparer.Ordinal);
-    private readonly HashSet<string> _inFlight = new(StringComparer.Ordinal);
-    private readonly HashSet<string> _again = new(StringComparer.Ordinal);
+    private readonly Dictionary<string, SaveQueue> _queues = new(StringComparer.Ordinal);
     private RatingSheetView? _shown;
     private Dictionary<string, CellDraft> _drafts = new(StringComparer.Ordinal);
     private GridKeyboard _keys = new(0, 0, [], _ => false);
@@ -207,8 +206,7 @@ public partial class RatingGrid : IAsyncDisposable
     {
         _declining = false;
         d.Declined = null;
-        d.State = d.Changed ? CellState.Draft : CellState.Saved;
-        d.Message = d.NotSavableReason();
+        d.Settle();
     }
 
     private async Task RestoreMineAsync(CellDraft d)
@@ -224,8 +222,7 @@ public partial class RatingGrid : IAsyncDisposable
         CancelTimer(key);
         if (d.State is not CellState.Saving)
         {
-            d.State = d.Changed ? CellState.Draft : CellState.Saved;
-            d.Message = d.NotSavableReason();
+            d.Settle();
         }
 
         if (AutosaveDelay <= TimeSpan.Zero)
@@ -261,7 +258,11 @@ public partial class RatingGrid : IAsyncDisposable
         }
     }
 
-    /// <summary>Sends the cell now if it has something savable; one save per cell at a time, the latest state last.</summary>
+    /// <summary>
+    /// Sends the cell now if it has something savable. Each cell has its own <see cref="SaveQueue"/>, as the weighting
+    /// components do: one save per cell at a time, and a change made meanwhile is sent once more afterwards with the
+    /// latest state, unless the first answer showed the cell was changed elsewhere.
+    /// </summary>
     private async Task SaveNowAsync(CellDraft d)
     {
         var key = Key(d.Alternative, d.Criterion);
@@ -271,44 +272,44 @@ public partial class RatingGrid : IAsyncDisposable
             return;
         }
 
-        if (_inFlight.Contains(key))
+        if (!_queues.TryGetValue(key, out var queue))
         {
-            _again.Add(key);
-            return;
+            _queues[key] = queue = new SaveQueue();
         }
 
+        var first = true;
+        await queue.RunAsync(async () =>
+        {
+            if (!first && d.State is CellState.Stale)
+            {
+                return;
+            }
+
+            first = false;
+            await SendAsync(d);
+        });
+        StateHasChanged();
+    }
+
+    private async Task SendAsync(CellDraft d)
+    {
         var request = d.Request();
         if (request is null)
         {
-            if (d.State is not CellState.Stale)
-            {
-                d.State = d.Changed ? CellState.Draft : CellState.Saved;
-                d.Message = d.NotSavableReason();
-            }
-
+            d.Settle();
             StateHasChanged();
             return;
         }
 
         d.State = CellState.Saving;
         d.Message = null;
-        _inFlight.Add(key);
         StateHasChanged();
-        CellSaveResult result;
-        try
-        {
-            result = await OnSave(d.Stored, request);
-        }
-        finally
-        {
-            _inFlight.Remove(key);
-        }
-
+        var result = await OnSave(d.Stored, request);
         if (result.Saved is { } saved)
         {
             d.Accept(saved, request);
-            d.State = d.Changed ? CellState.Draft : CellState.Saved;
-            d.Message = d.NotSavableReason();
+            d.State = CellState.Saved;
+            d.Settle();
         }
         else if (result.Current is { } current)
         {
@@ -320,13 +321,6 @@ public partial class RatingGrid : IAsyncDisposable
             d.State = CellState.Error;
             d.Message = result.Problem?.OneLine ?? ProblemText.Unexpected.Detail;
         }
-
-        if (_again.Remove(key) && d.State is not CellState.Stale)
-        {
-            await SaveNowAsync(d);
-        }
-
-        StateHasChanged();
     }
 
     /// <summary>Saves everything still waiting, then lists what stops the submission, or asks for confirmation.</summary>
