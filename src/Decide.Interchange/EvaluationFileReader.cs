@@ -55,6 +55,30 @@ public static partial class EvaluationFileReader
         return EvaluationParser.ParsePlan(document.RootElement);
     }
 
+    /// <summary>
+    /// Reads one scale as it stands in a plan's <paramref name="member"/> (<c>ratingScale</c>, <c>importanceScale</c>
+    /// or <c>pairwiseScale</c>): a built-in scale's name or a scale object, with that member's default range.
+    /// </summary>
+    /// <exception cref="InvalidEvaluationException">The scale breaks a rule; every problem is listed, at <c>$.member…</c>.</exception>
+    public static Decide.Core.Scales.LinguisticScale ReadScale(JsonElement value, string member)
+    {
+        var (range, fallback) = member switch
+        {
+            "ratingScale" => (EvaluationFormat.DefaultRatingRange, Decide.Core.Scales.BuiltInScales.ChenRating7),
+            "importanceScale" => (EvaluationFormat.DefaultImportanceRange, Decide.Core.Scales.BuiltInScales.ChenImportance7),
+            "pairwiseScale" => (EvaluationFormat.DefaultPairwiseRange, Decide.Core.Scales.BuiltInScales.Pairwise9),
+            _ => throw new ArgumentOutOfRangeException(nameof(member), member, "not a scale member of the plan"),
+        };
+        var context = new ReadContext();
+        var scale = ScaleReader.Read(context, value, $"$.{member}", range, fallback, out var usable);
+        if (!usable)
+        {
+            throw new InvalidEvaluationException(context.Errors.ToArray());
+        }
+
+        return scale;
+    }
+
     /// <summary>Reads an evaluation from UTF-8 bytes (a leading byte-order mark is allowed).</summary>
     /// <exception cref="InvalidEvaluationException">The bytes are not a valid evaluation; every problem is listed.</exception>
     public static EvaluationFile Read(ReadOnlyMemory<byte> utf8Json)

@@ -114,7 +114,7 @@ public static class EvaluationFileWriter
 
         w.WriteEndArray();
 
-        w.WriteString("weighting", e.Weighting == WeightingMethod.Pairwise ? "pairwise" : "importance");
+        w.WriteString("weighting", FormatWords.Of(e.Weighting));
         WriteImportance(w, e.Importance);
         WritePairwise(w, e.Pairwise, e.PairwiseScale);
         WriteRatings(w, e.Ratings);
@@ -123,10 +123,10 @@ public static class EvaluationFileWriter
         WriteGates(w, e.Gates);
 
         w.WriteStartObject("options");
-        w.WriteString("aggregation", e.Options.Aggregation == AggregationRule.Geometric ? "geometric" : "mean");
-        w.WriteString("ideal", e.Options.Ideal == IdealPoints.Extreme ? "extreme" : "unit");
+        w.WriteString("aggregation", FormatWords.Of(e.Options.Aggregation));
+        w.WriteString("ideal", FormatWords.Of(e.Options.Ideal));
         w.WriteNumber("divergenceTolerance", e.Options.DivergenceTolerance);
-        w.WriteString("acceptabilityWeights", e.Options.AcceptabilityWeights == AcceptabilityWeights.Uniform ? "uniform" : "fuzzy");
+        w.WriteString("acceptabilityWeights", FormatWords.Of(e.Options.AcceptabilityWeights));
         w.WriteEndObject();
         w.WriteEndObject();
     }
@@ -182,15 +182,10 @@ public static class EvaluationFileWriter
         w.WriteStartObject();
         w.WriteString("id", c.Id);
         w.WriteString("name", c.Name);
-        w.WriteString("kind", c.Kind switch
-        {
-            CriterionKind.Numeric => "numeric",
-            CriterionKind.Gate => "gate",
-            _ => "linguistic",
-        });
+        w.WriteString("kind", FormatWords.Of(c.Kind));
         if (c.Kind != CriterionKind.Gate || c.Direction != Direction.Benefit)
         {
-            w.WriteString("direction", c.Direction == Direction.Cost ? "cost" : "benefit");
+            w.WriteString("direction", FormatWords.Of(c.Direction));
         }
 
         WriteOptional(w, "group", c.Group);

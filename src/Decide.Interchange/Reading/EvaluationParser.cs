@@ -37,22 +37,6 @@ internal sealed class EvaluationParser
     private static readonly string[] GateMembers = ["passed", "note"];
     private static readonly string[] OptionMembers = ["aggregation", "ideal", "divergenceTolerance", "acceptabilityWeights"];
 
-    private static readonly (string, CriterionKind)[] Kinds =
-        [("linguistic", CriterionKind.Linguistic), ("numeric", CriterionKind.Numeric), ("gate", CriterionKind.Gate)];
-
-    private static readonly (string, Direction)[] Directions = [("benefit", Direction.Benefit), ("cost", Direction.Cost)];
-
-    private static readonly (string, WeightingMethod)[] Weightings =
-        [("importance", WeightingMethod.Importance), ("pairwise", WeightingMethod.Pairwise)];
-
-    private static readonly (string, AggregationRule)[] Aggregations =
-        [("mean", AggregationRule.Mean), ("geometric", AggregationRule.Geometric)];
-
-    private static readonly (string, IdealPoints)[] Ideals = [("unit", IdealPoints.Unit), ("extreme", IdealPoints.Extreme)];
-
-    private static readonly (string, AcceptabilityWeights)[] AcceptabilityWeightings =
-        [("fuzzy", AcceptabilityWeights.Fuzzy), ("uniform", AcceptabilityWeights.Uniform)];
-
     /// <summary>Stands in for a scale that could not be read, so the rest of the file can still be checked.</summary>
     private static readonly LinguisticScale StandIn = LinguisticScale.Create("stand-in", 1, 2,
         [new LinguisticTerm("a", "a", Tfn.Crisp(1)), new LinguisticTerm("b", "b", Tfn.Crisp(2))]);
@@ -106,7 +90,7 @@ internal sealed class EvaluationParser
             f.String("id", "the alternative's id") is { } id ? new Alternative(id, f.String("name", "the alternative's name") ?? "") : null);
         var assessors = List(top, "assessors", AssessorMembers, required: !_planOnly, Assessor);
 
-        var weighting = top.Choice("weighting", Weightings, WeightingMethod.Importance, out var weightingReadable);
+        var weighting = top.Choice("weighting", FormatWords.Weightings, WeightingMethod.Importance, out var weightingReadable);
         if (!weightingReadable)
         {
             // Guess from what the file holds, so that the judgements are still checked.
@@ -217,14 +201,14 @@ internal sealed class EvaluationParser
         }
 
         var name = f.String("name", "the criterion's name") ?? "";
-        var kind = f.Choice("kind", Kinds, CriterionKind.Linguistic, out var kindReadable);
+        var kind = f.Choice("kind", FormatWords.Kinds, CriterionKind.Linguistic, out var kindReadable);
         if (!kindReadable)
         {
             _uncertainCriteria.Add(id);
             _in.Cover(f.MemberPath("direction")); // the direction rules depend on the kind
         }
 
-        var direction = f.Choice("direction", Directions, Direction.Benefit, out _);
+        var direction = f.Choice("direction", FormatWords.Directions, Direction.Benefit, out _);
         var group = f.String("group");
         var descriptors = f.StringMap("descriptors");
         var unit = f.String("unit");
@@ -530,10 +514,10 @@ internal sealed class EvaluationParser
 
         var defaults = new AnalysisOptions();
         return new AnalysisOptions(
-            f.Choice("aggregation", Aggregations, defaults.Aggregation, out _),
-            f.Choice("ideal", Ideals, defaults.Ideal, out _),
+            f.Choice("aggregation", FormatWords.Aggregations, defaults.Aggregation, out _),
+            f.Choice("ideal", FormatWords.Ideals, defaults.Ideal, out _),
             f.TryGet("divergenceTolerance", out var tolerance) ? Tolerance(tolerance) ?? defaults.DivergenceTolerance : defaults.DivergenceTolerance,
-            f.Choice("acceptabilityWeights", AcceptabilityWeightings, defaults.AcceptabilityWeights, out _));
+            f.Choice("acceptabilityWeights", FormatWords.AcceptabilityWeightings, defaults.AcceptabilityWeights, out _));
     }
 
     /// <summary>A number of scale steps: a whole number, 0 or more (2.0 is accepted as 2, as JSON Schema does).</summary>

@@ -1,6 +1,7 @@
 using System.Text.Json;
 using Decide.Core.Model;
 using Decide.Interchange;
+using Decide.Interchange.Plans;
 using Decide.Web.Components.Pages.Setup;
 using Decide.Web.Features.Evaluations;
 
@@ -101,7 +102,7 @@ public sealed class PlanDraftTests
     public void Changing_to_a_scale_without_some_terms_leaves_their_descriptors_out_of_the_plan()
     {
         var draft = PlanDraft.From(JsonDocument.Parse(StoredPlan()).RootElement, Defaults);
-        draft.RatingScale = new ScaleSetting("rating-5");
+        draft.RatingScale = PlanScale.Named("rating-5");
 
         var plan = EvaluationFileReader.ReadPlan(draft.ToJson()).Evaluation;
 

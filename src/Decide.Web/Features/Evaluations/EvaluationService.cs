@@ -7,6 +7,7 @@ using Decide.Core.Analysis;
 using Decide.Data;
 using Decide.Data.Entities;
 using Decide.Interchange;
+using Decide.Interchange.Plans;
 using Decide.Web.Features.Audit;
 using Decide.Web.Infrastructure;
 using Microsoft.EntityFrameworkCore;
@@ -584,17 +585,8 @@ public sealed class EvaluationService(
         }
     }
 
-    private static string StarterPlan(CreateEvaluationRequest r) => JsonSerializer.Serialize(new Dictionary<string, object?>
-    {
-        ["format"] = EvaluationFormat.Evaluation,
-        ["title"] = r.Title.Trim(),
-        ["reference"] = r.Reference.Trim(),
-        ["organisation"] = r.Organisation?.Trim(),
-        ["ratingScale"] = "chen-rating-7",
-        ["importanceScale"] = "chen-importance-7",
-        ["criteria"] = Array.Empty<object>(),
-        ["weighting"] = "importance",
-    });
+    private static string StarterPlan(CreateEvaluationRequest r) =>
+        PlanDocumentWriter.ToJson(PlanDocument.Starter(r.Title, r.Reference, r.Organisation));
 
     private static string Describe(IEnumerable<PanelMember> seats) =>
         string.Join("; ", seats.Select(p => $"{p.UserId}:{p.Role}{(p.AssessorCode is null ? "" : $":{p.AssessorCode}:w{p.Weight}")}"));

@@ -1,17 +1,16 @@
 using System.Text;
-using System.Text.Encodings.Web;
 using System.Text.Json;
 using Decide.Core.Model;
 using Decide.Core.Scales;
-using Decide.Interchange;
+using Decide.Interchange.Plans;
 using Decide.Web.Features.Evaluations;
 
 namespace Decide.Web.Components.Pages.Setup;
 
 /// <summary>
-/// The plan while the facilitator edits it: read from the stored <c>decide-evaluation/1</c> plan (leniently, since a
-/// plan in the making may not be complete), changed by the setup steps, and written back as a plan document with
-/// the settings that live beside it. The panel and the bids are not part of it.
+/// The plan while the facilitator edits it: read from the stored plan by the file format's lenient reader (a plan in
+/// the making may not be complete), changed by the setup steps, and written back by the format's plan writer, with
+/// the settings that live beside it. No JSON is read or written here. The panel and the bids are not part of it.
 /// </summary>
 public sealed class PlanDraft
 {
@@ -23,8 +22,6 @@ public sealed class PlanDraft
 
     /// <summary>Nouns for what is chosen, offered as suggestions; any other plural noun is fine.</summary>
     public static readonly IReadOnlyList<string> Nouns = ["bids", "suppliers", "tenders", "candidates", "options"];
-
-    private static readonly JsonWriterOptions WriterOptions = new() { Encoder = JavaScriptEncoder.UnsafeRelaxedJsonEscaping };
 
     public string Title { get; set; } = "";
 
@@ -38,11 +35,11 @@ public sealed class PlanDraft
     /// <summary>What is chosen, plural ("bids"); the plan's <c>noun</c>.</summary>
     public string? Noun { get; set; }
 
-    public ScaleSetting RatingScale { get; set; } = new("chen-rating-7");
+    public PlanScale RatingScale { get; set; } = PlanScale.Named("chen-rating-7");
 
-    public ScaleSetting ImportanceScale { get; set; } = new("chen-importance-7");
+    public PlanScale ImportanceScale { get; set; } = PlanScale.Named("chen-importance-7");
 
-    public ScaleSetting PairwiseScale { get; set; } = new("pairwise-9");
+    public PlanScale PairwiseScale { get; set; } = PlanScale.Named("pairwise-9");
 
     public List<GroupDraft> Groups { get; } = [];
 
@@ -71,67 +68,65 @@ public sealed class PlanDraft
     /// <summary>The settings kept beside the plan.</summary>
     public EvaluationSettings Settings => new(MinRationaleLength, PricesVisibleToAssessors, RequiredApprovals);
 
-    /// <summary>Reads a stored plan; members it does not recognise are left at their defaults.</summary>
+    /// <summary>Reads a stored plan (leniently, <see cref="PlanDocumentReader"/>); members it does not recognise are left at their defaults.</summary>
     public static PlanDraft From(JsonElement plan, EvaluationSettings settings)
     {
+        var read = PlanDocumentReader.Read(plan);
         var d = new PlanDraft
         {
-            Title = Text(plan, "title") ?? "",
-            Reference = Text(plan, "reference"),
-            Organisation = Text(plan, "organisation"),
-            Description = Text(plan, "description"),
-            Noun = Text(plan, "noun"),
-            RatingScale = ScaleSetting.From(plan, "ratingScale", "chen-rating-7"),
-            ImportanceScale = ScaleSetting.From(plan, "importanceScale", "chen-importance-7"),
-            PairwiseScale = ScaleSetting.From(plan, "pairwiseScale", "pairwise-9"),
-            Weighting = Text(plan, "weighting") == "pairwise" ? WeightingMethod.Pairwise : WeightingMethod.Importance,
+            Title = read.Title,
+            Reference = read.Reference,
+            Organisation = read.Organisation,
+            Description = read.Description,
+            Noun = read.Noun,
+            RatingScale = read.RatingScale,
+            ImportanceScale = read.ImportanceScale,
+            PairwiseScale = read.PairwiseScale,
+            Weighting = read.Weighting,
+            Aggregation = read.Options.Aggregation,
+            Ideal = read.Options.Ideal,
+            DivergenceTolerance = read.Options.DivergenceTolerance,
+            AcceptabilityWeights = read.Options.AcceptabilityWeights,
             MinRationaleLength = settings.MinRationaleLength,
             PricesVisibleToAssessors = settings.PricesVisibleToAssessors,
             RequiredApprovals = settings.RequiredApprovals,
         };
-
-        foreach (var g in Items(plan, "groups"))
-        {
-            d.Groups.Add(new GroupDraft { Id = Text(g, "id") ?? "", Name = Text(g, "name") ?? "", Stored = true });
-        }
-
-        foreach (var c in Items(plan, "criteria"))
+        d.Groups.AddRange(read.Groups.Select(g => new GroupDraft { Id = g.Id, Name = g.Name, Stored = true }));
+        foreach (var c in read.Criteria)
         {
             var criterion = new CriterionDraft
             {
-                Id = Text(c, "id") ?? "",
-                Name = Text(c, "name") ?? "",
-                Kind = Text(c, "kind") switch { "numeric" => CriterionKind.Numeric, "gate" => CriterionKind.Gate, _ => CriterionKind.Linguistic },
-                Direction = Text(c, "direction") == "cost" ? Direction.Cost : Direction.Benefit,
-                Group = Text(c, "group"),
-                Unit = Text(c, "unit"),
-                Description = Text(c, "description"),
-                Stored = true,
+                Id = c.Id, Name = c.Name, Kind = c.Kind, Direction = c.Direction, Group = c.Group, Unit = c.Unit,
+                Description = c.Description, Stored = true,
             };
-            if (c.TryGetProperty("descriptors", out var descriptors) && descriptors.ValueKind == JsonValueKind.Object)
+            foreach (var (code, text) in c.Descriptors ?? new Dictionary<string, string>())
             {
-                foreach (var p in descriptors.EnumerateObject().Where(p => p.Value.ValueKind == JsonValueKind.String))
-                {
-                    criterion.Descriptors[p.Name] = p.Value.GetString()!;
-                }
+                criterion.Descriptors[code] = text;
             }
 
             d.Criteria.Add(criterion);
         }
 
-        if (plan.TryGetProperty("options", out var options) && options.ValueKind == JsonValueKind.Object)
-        {
-            d.Aggregation = Text(options, "aggregation") == "geometric" ? AggregationRule.Geometric : AggregationRule.Mean;
-            d.Ideal = Text(options, "ideal") == "extreme" ? IdealPoints.Extreme : IdealPoints.Unit;
-            d.AcceptabilityWeights = Text(options, "acceptabilityWeights") == "uniform" ? AcceptabilityWeights.Uniform : AcceptabilityWeights.Fuzzy;
-            if (options.TryGetProperty("divergenceTolerance", out var tolerance) && tolerance.TryGetInt32(out var steps))
-            {
-                d.DivergenceTolerance = steps;
-            }
-        }
-
         return d;
     }
+
+    /// <summary>The plan being edited, as the file format's plan document.</summary>
+    public PlanDocument ToDocument() => new()
+    {
+        Title = Title,
+        Reference = Reference,
+        Organisation = Organisation,
+        Description = Description,
+        Noun = Noun,
+        RatingScale = RatingScale,
+        ImportanceScale = ImportanceScale,
+        PairwiseScale = PairwiseScale,
+        Groups = Groups.Select(g => new CriterionGroup(g.Id, g.Name)).ToArray(),
+        Criteria = Criteria.Select(c => new PlanCriterion(c.Id, c.Name, c.Kind, c.Direction, c.Group, c.Unit, c.Description,
+            new Dictionary<string, string>(c.Descriptors, StringComparer.Ordinal))).ToArray(),
+        Weighting = Weighting,
+        Options = new AnalysisOptions(Aggregation, Ideal, DivergenceTolerance, AcceptabilityWeights),
+    };
 
     /// <summary>Adds a criterion (at the end) and returns it.</summary>
     public CriterionDraft AddCriterion()
@@ -214,17 +209,8 @@ public sealed class PlanDraft
         }
     }
 
-    /// <summary>The plan document (<c>decide-evaluation/1</c>, without panel, bids or inputs).</summary>
-    public string ToJson()
-    {
-        using var buffer = new MemoryStream();
-        using (var w = new Utf8JsonWriter(buffer, WriterOptions))
-        {
-            Write(w);
-        }
-
-        return Encoding.UTF8.GetString(buffer.ToArray());
-    }
+    /// <summary>The plan document (<c>decide-evaluation/1</c>, without panel, bids or inputs), by <see cref="PlanDocumentWriter"/>.</summary>
+    public string ToJson() => PlanDocumentWriter.ToJson(ToDocument());
 
     /// <summary>The plan document as a JSON element, for <see cref="UpdatePlanRequest"/>.</summary>
     public JsonElement ToElement()
@@ -235,98 +221,6 @@ public sealed class PlanDraft
 
     /// <summary>A request to store this plan and its settings on top of <paramref name="version"/>.</summary>
     public UpdatePlanRequest ToRequest(long version) => new(ToElement(), Settings, version);
-
-    private void Write(Utf8JsonWriter w)
-    {
-        w.WriteStartObject();
-        w.WriteString("format", EvaluationFormat.Evaluation);
-        w.WriteString("title", Title);
-        Optional(w, "reference", Reference);
-        Optional(w, "organisation", Organisation);
-        Optional(w, "description", Description);
-        Optional(w, "noun", Noun?.Trim().ToLowerInvariant());
-        RatingScale.Write(w, "ratingScale");
-        ImportanceScale.Write(w, "importanceScale");
-        if (Weighting == WeightingMethod.Pairwise || PairwiseScale.Custom is not null)
-        {
-            PairwiseScale.Write(w, "pairwiseScale");
-        }
-
-        if (Groups.Count > 0)
-        {
-            w.WriteStartArray("groups");
-            foreach (var g in Groups)
-            {
-                w.WriteStartObject();
-                w.WriteString("id", g.Id.Trim());
-                w.WriteString("name", g.Name.Trim());
-                w.WriteEndObject();
-            }
-
-            w.WriteEndArray();
-        }
-
-        var terms = RatingTerms.Terms.Select(t => t.Code).ToArray();
-        w.WriteStartArray("criteria");
-        foreach (var c in Criteria)
-        {
-            w.WriteStartObject();
-            w.WriteString("id", c.Id.Trim());
-            w.WriteString("name", c.Name.Trim());
-            w.WriteString("kind", c.Kind switch { CriterionKind.Numeric => "numeric", CriterionKind.Gate => "gate", _ => "linguistic" });
-            if (c.Kind != CriterionKind.Gate)
-            {
-                w.WriteString("direction", c.Direction == Direction.Cost ? "cost" : "benefit");
-                Optional(w, "group", c.Group);
-            }
-
-            if (c.Kind == CriterionKind.Numeric)
-            {
-                Optional(w, "unit", c.Unit);
-            }
-
-            Optional(w, "description", c.Description);
-            var said = terms.Where(t => c.Descriptors.TryGetValue(t, out var text) && !string.IsNullOrWhiteSpace(text)).ToArray();
-            if (c.Kind == CriterionKind.Linguistic && said.Length > 0)
-            {
-                w.WriteStartObject("descriptors");
-                foreach (var t in said)
-                {
-                    w.WriteString(t, c.Descriptors[t].Trim());
-                }
-
-                w.WriteEndObject();
-            }
-
-            w.WriteEndObject();
-        }
-
-        w.WriteEndArray();
-        w.WriteString("weighting", Weighting == WeightingMethod.Pairwise ? "pairwise" : "importance");
-        w.WriteStartObject("options");
-        w.WriteString("aggregation", Aggregation == AggregationRule.Geometric ? "geometric" : "mean");
-        w.WriteString("ideal", Ideal == IdealPoints.Extreme ? "extreme" : "unit");
-        w.WriteNumber("divergenceTolerance", DivergenceTolerance);
-        w.WriteString("acceptabilityWeights", AcceptabilityWeights == AcceptabilityWeights.Uniform ? "uniform" : "fuzzy");
-        w.WriteEndObject();
-        w.WriteEndObject();
-    }
-
-    private static void Optional(Utf8JsonWriter w, string name, string? value)
-    {
-        if (!string.IsNullOrWhiteSpace(value))
-        {
-            w.WriteString(name, value.Trim());
-        }
-    }
-
-    private static string? Text(JsonElement e, string name) =>
-        e.ValueKind == JsonValueKind.Object && e.TryGetProperty(name, out var value) && value.ValueKind == JsonValueKind.String ? value.GetString() : null;
-
-    private static IEnumerable<JsonElement> Items(JsonElement e, string name) =>
-        e.TryGetProperty(name, out var list) && list.ValueKind == JsonValueKind.Array
-            ? list.EnumerateArray().Where(x => x.ValueKind == JsonValueKind.Object)
-            : [];
 
     private static string Slug(string name, string fallback)
     {

@@ -1,0 +1,80 @@
+using Decide.Core.Model;
+
+namespace Decide.Interchange;
+
+/// <summary>
+/// The one table of the words the portable file uses for the engine's choices (<c>"numeric"</c>, <c>"cost"</c>,
+/// <c>"pairwise"</c>, <c>"geometric"</c>, …). The strict reader, the lenient plan reader and both writers take their
+/// words from here; docs/evaluation-format.md lists the same words.
+/// </summary>
+public static class FormatWords
+{
+    /// <summary>Criterion kinds: <c>linguistic</c>, <c>numeric</c>, <c>gate</c>.</summary>
+    public static IReadOnlyList<(string Name, CriterionKind Value)> Kinds { get; } =
+        [("linguistic", CriterionKind.Linguistic), ("numeric", CriterionKind.Numeric), ("gate", CriterionKind.Gate)];
+
+    /// <summary>Directions: <c>benefit</c>, <c>cost</c>.</summary>
+    public static IReadOnlyList<(string Name, Direction Value)> Directions { get; } =
+        [("benefit", Direction.Benefit), ("cost", Direction.Cost)];
+
+    /// <summary>Weighting methods: <c>importance</c>, <c>pairwise</c>.</summary>
+    public static IReadOnlyList<(string Name, WeightingMethod Value)> Weightings { get; } =
+        [("importance", WeightingMethod.Importance), ("pairwise", WeightingMethod.Pairwise)];
+
+    /// <summary>Aggregation rules: <c>mean</c>, <c>geometric</c>.</summary>
+    public static IReadOnlyList<(string Name, AggregationRule Value)> Aggregations { get; } =
+        [("mean", AggregationRule.Mean), ("geometric", AggregationRule.Geometric)];
+
+    /// <summary>Ideal points: <c>unit</c>, <c>extreme</c>.</summary>
+    public static IReadOnlyList<(string Name, IdealPoints Value)> Ideals { get; } =
+        [("unit", IdealPoints.Unit), ("extreme", IdealPoints.Extreme)];
+
+    /// <summary>Where acceptability draws take their weights: <c>fuzzy</c>, <c>uniform</c>.</summary>
+    public static IReadOnlyList<(string Name, AcceptabilityWeights Value)> AcceptabilityWeightings { get; } =
+        [("fuzzy", AcceptabilityWeights.Fuzzy), ("uniform", AcceptabilityWeights.Uniform)];
+
+    /// <summary>The file's word for a criterion kind.</summary>
+    public static string Of(CriterionKind value) => Word(Kinds, value);
+
+    /// <summary>The file's word for a direction.</summary>
+    public static string Of(Direction value) => Word(Directions, value);
+
+    /// <summary>The file's word for a weighting method.</summary>
+    public static string Of(WeightingMethod value) => Word(Weightings, value);
+
+    /// <summary>The file's word for an aggregation rule.</summary>
+    public static string Of(AggregationRule value) => Word(Aggregations, value);
+
+    /// <summary>The file's word for a choice of ideal points.</summary>
+    public static string Of(IdealPoints value) => Word(Ideals, value);
+
+    /// <summary>The file's word for the acceptability weights.</summary>
+    public static string Of(AcceptabilityWeights value) => Word(AcceptabilityWeightings, value);
+
+    /// <summary>The value a word stands for in <paramref name="table"/>, or <paramref name="fallback"/> when it is not one of them.</summary>
+    public static T Parse<T>(IReadOnlyList<(string Name, T Value)> table, string? word, T fallback)
+    {
+        foreach (var (name, value) in table)
+        {
+            if (name == word)
+            {
+                return value;
+            }
+        }
+
+        return fallback;
+    }
+
+    private static string Word<T>(IReadOnlyList<(string Name, T Value)> table, T value)
+    {
+        foreach (var (name, v) in table)
+        {
+            if (EqualityComparer<T>.Default.Equals(v, value))
+            {
+                return name;
+            }
+        }
+
+        throw new ArgumentOutOfRangeException(nameof(value), value, "no word of the file format stands for this value");
+    }
+}

@@ -1,0 +1,85 @@
+using System.Text.Json;
+using Decide.Core.Model;
+
+namespace Decide.Interchange.Plans;
+
+/// <summary>
+/// Reads a stored plan leniently into a <see cref="PlanDocument"/>: a member it does not recognise, or of the wrong
+/// type, is left at its default, so a plan in the making always opens for editing. The strict reader
+/// (<see cref="EvaluationFileReader.ReadPlan(string)"/>) says what is wrong with it.
+/// </summary>
+public static class PlanDocumentReader
+{
+    /// <summary>Reads <paramref name="plan"/>, a plan document's root object.</summary>
+    public static PlanDocument Read(JsonElement plan)
+    {
+        var defaults = new PlanDocument();
+        var options = plan.ValueKind == JsonValueKind.Object && plan.TryGetProperty("options", out var o) && o.ValueKind == JsonValueKind.Object ? o : default;
+        return new PlanDocument
+        {
+            Title = Text(plan, "title") ?? "",
+            Reference = Text(plan, "reference"),
+            Organisation = Text(plan, "organisation"),
+            Description = Text(plan, "description"),
+            Noun = Text(plan, "noun"),
+            RatingScale = Scale(plan, "ratingScale", defaults.RatingScale),
+            ImportanceScale = Scale(plan, "importanceScale", defaults.ImportanceScale),
+            PairwiseScale = Scale(plan, "pairwiseScale", defaults.PairwiseScale),
+            Groups = Items(plan, "groups").Select(g => new CriterionGroup(Text(g, "id") ?? "", Text(g, "name") ?? "")).ToArray(),
+            Criteria = Items(plan, "criteria").Select(Criterion).ToArray(),
+            Weighting = FormatWords.Parse(FormatWords.Weightings, Text(plan, "weighting"), defaults.Weighting),
+            Options = new AnalysisOptions(
+                FormatWords.Parse(FormatWords.Aggregations, Text(options, "aggregation"), defaults.Options.Aggregation),
+                FormatWords.Parse(FormatWords.Ideals, Text(options, "ideal"), defaults.Options.Ideal),
+                options.ValueKind == JsonValueKind.Object && options.TryGetProperty("divergenceTolerance", out var t) && t.ValueKind == JsonValueKind.Number && t.TryGetInt32(out var steps)
+                    ? steps
+                    : defaults.Options.DivergenceTolerance,
+                FormatWords.Parse(FormatWords.AcceptabilityWeightings, Text(options, "acceptabilityWeights"), defaults.Options.AcceptabilityWeights)),
+        };
+    }
+
+    private static PlanCriterion Criterion(JsonElement c)
+    {
+        var descriptors = new Dictionary<string, string>(StringComparer.Ordinal);
+        if (c.TryGetProperty("descriptors", out var said) && said.ValueKind == JsonValueKind.Object)
+        {
+            foreach (var p in said.EnumerateObject().Where(p => p.Value.ValueKind == JsonValueKind.String))
+            {
+                descriptors[p.Name] = p.Value.GetString()!;
+            }
+        }
+
+        return new PlanCriterion(
+            Text(c, "id") ?? "",
+            Text(c, "name") ?? "",
+            FormatWords.Parse(FormatWords.Kinds, Text(c, "kind"), CriterionKind.Linguistic),
+            FormatWords.Parse(FormatWords.Directions, Text(c, "direction"), Direction.Benefit),
+            Text(c, "group"),
+            Text(c, "unit"),
+            Text(c, "description"),
+            descriptors);
+    }
+
+    private static PlanScale Scale(JsonElement plan, string member, PlanScale fallback)
+    {
+        if (plan.ValueKind != JsonValueKind.Object || !plan.TryGetProperty(member, out var value))
+        {
+            return fallback;
+        }
+
+        return value.ValueKind switch
+        {
+            JsonValueKind.String => PlanScale.Named(value.GetString()!),
+            JsonValueKind.Object => new PlanScale(Text(value, "name") ?? "custom", value.Clone()),
+            _ => fallback,
+        };
+    }
+
+    private static string? Text(JsonElement e, string name) =>
+        e.ValueKind == JsonValueKind.Object && e.TryGetProperty(name, out var value) && value.ValueKind == JsonValueKind.String ? value.GetString() : null;
+
+    private static IEnumerable<JsonElement> Items(JsonElement e, string name) =>
+        e.ValueKind == JsonValueKind.Object && e.TryGetProperty(name, out var list) && list.ValueKind == JsonValueKind.Array
+            ? list.EnumerateArray().Where(x => x.ValueKind == JsonValueKind.Object)
+            : [];
+}
