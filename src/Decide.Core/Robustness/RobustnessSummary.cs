@@ -91,7 +91,7 @@ public static class RobustnessSummary
 
     private static void Critical(List<string> lines, CriticalChangesResult critical, Dictionary<string, string> names, Dictionary<string, string> criteria)
     {
-        if (critical.TopAbsolute is not { } most)
+        if (critical.TopShare is not { } most)
         {
             lines.Add("No change of any single criterion's weight, from 0% to 100%, moves the leader from first place.");
             return;
