@@ -62,6 +62,10 @@ public sealed class RobustnessResultsTests
     [InlineData("sensitivity.criticalChanges.mostCritical.topRelative.pair", JsonValueKind.Array)]
     [InlineData("sensitivity.criticalChanges.mostCritical.anyAbsolute.absolute", JsonValueKind.Number)]
     [InlineData("sensitivity.criticalChanges.mostCritical.anyRelative.relative", JsonValueKind.Number)]
+    [InlineData("sensitivity.criticalChanges.mostCritical.anyAbsolute.delta", JsonValueKind.Number)]
+    [InlineData("sensitivity.criticalChanges.mostCritical.topRelative.deltaRelative", JsonValueKind.Number)]
+    [InlineData("sensitivity.criticalChanges.mostCritical.topShare.weight", JsonValueKind.Number)]
+    [InlineData("sensitivity.criticalChanges.mostCritical.anyShare.absolute", JsonValueKind.Number)]
     [InlineData("sensitivity.acceptability[0].alternative", JsonValueKind.String)]
     [InlineData("sensitivity.acceptability[0].ranks", JsonValueKind.Array)]
     [InlineData("sensitivity.acceptability[0].intervals[0]", JsonValueKind.Array)]
@@ -162,10 +166,23 @@ public sealed class RobustnessResultsTests
         });
         Assert.All(reversing, c =>
         {
-            Assert.False(c.TryGetProperty("note", out _));
             var delta = Math.Abs(c.GetProperty("weight").GetDouble() - c.GetProperty("current").GetDouble());
             Assert.Equal(delta, c.GetProperty("absolute").GetDouble(), 12);
             Assert.Equal(delta / c.GetProperty("current").GetDouble() * 100, c.GetProperty("relative").GetDouble(), 9);
+            if (c.TryGetProperty("delta", out var tsDelta))
+            {
+                Assert.False(c.TryGetProperty("note", out _));
+                // Triantaphyllou & Sánchez: the weight alone w − δ, renormalised by 1 − δ, is the share at which the pair swaps.
+                var w = c.GetProperty("current").GetDouble();
+                var share = c.GetProperty("deltaShare").GetDouble();
+                Assert.Equal(share, (w - tsDelta.GetDouble()) / (1 - tsDelta.GetDouble()), 9);
+                Assert.InRange(w - tsDelta.GetDouble(), 0, 1);
+                Assert.Equal(tsDelta.GetDouble() / w * 100, c.GetProperty("deltaRelative").GetDouble(), 9);
+            }
+            else
+            {
+                Assert.Equal("reverses only if this criterion's weight alone rose above 1 before renormalising", c.GetProperty("note").GetString());
+            }
         });
     }
 
@@ -334,7 +351,7 @@ public sealed class RobustnessResultsTests
         var most = At(analysed.Json, "sensitivity.criticalChanges.mostCritical");
 
         Assert.Null(analysed.Robustness.Sensitivity.CriticalChanges.AnyAbsolute);
-        Assert.Equal(["topAbsolute", "topRelative", "anyAbsolute", "anyRelative"], most.EnumerateObject().Select(p => p.Name));
+        Assert.Equal(["topAbsolute", "topRelative", "anyAbsolute", "anyRelative", "topShare", "anyShare"], most.EnumerateObject().Select(p => p.Name));
         Assert.All(most.EnumerateObject(), p => Assert.Equal(JsonValueKind.Null, p.Value.ValueKind));
         Schemas.AssertValid(Schemas.Results, analysed.Text);
     }
