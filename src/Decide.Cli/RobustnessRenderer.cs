@@ -149,7 +149,8 @@ internal static class RobustnessRenderer
         var table = new TextTable("Method", "Winner", "Tau", "Description").AlignRight(2);
         foreach (var m in methods)
         {
-            var winner = m.Ranking.Count > 0 ? $"{m.Ranking[0]} {names.Alternative(m.Ranking[0])}{(m.SameWinner ? "" : " (differs)")}" : "-";
+            var winner = m.Note is { } note ? note
+                : m.Ranking.Count > 0 ? $"{m.Ranking[0]} {names.Alternative(m.Ranking[0])}{(m.SameWinner ? "" : " (differs)")}" : "-";
             table.Add(m.Method, winner, m.KendallTau is { } tau ? F(tau, 3) : "n/a", m.Description);
         }
 

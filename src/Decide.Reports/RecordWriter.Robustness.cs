@@ -156,11 +156,13 @@ internal sealed partial class RecordWriter
             _flow.Heading("Other methods");
             _flow.Table(
                 [new("Method", 4), new("Ranking", 6), new("Kendall τ", 1, CellAlign.Right), new("Same winner", 1.2)],
-                sensitivity.Methods.Select(m => (IReadOnlyList<string>)
-                [
-                    m.Description, string.Join(" > ", m.Ranking.Select(_names.Alternative)),
-                    m.KendallTau is { } tau ? RecordText.Number(tau, 2) : "—", m.SameWinner ? "yes" : "NO",
-                ]));
+                sensitivity.Methods.Select(m => (IReadOnlyList<string>)(m.Note is { } note
+                    ? [m.Description, note, "—", "—"]
+                    :
+                    [
+                        m.Description, string.Join(" > ", m.Ranking.Select(_names.Alternative)),
+                        m.KendallTau is { } tau ? RecordText.Number(tau, 2) : "—", m.SameWinner ? "yes" : "NO",
+                    ])));
         }
 
         var agreement = robustness.Agreement;

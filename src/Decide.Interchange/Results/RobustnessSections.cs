@@ -29,7 +29,7 @@ internal static class RobustnessSections
                 w.Alternative, w.Ranking.ToArray(),
                 w.Reversals.Select(r => new OrderReversalEntry(r.WasAhead, r.NowAhead)).ToArray())).ToArray(),
             s.Methods.Select(m => new MethodComparisonEntry(
-                m.Method, m.Description, m.Ranking.ToArray(), m.Scores.ToArray(), m.KendallTau, m.SameWinner)).ToArray());
+                m.Method, m.Description, m.Ranking.ToArray(), m.Scores.ToArray(), m.KendallTau, m.SameWinner, m.Note)).ToArray());
     }
 
     public static AgreementSection Agreement(PanelAgreementResult a)
