@@ -58,13 +58,15 @@ public sealed class RobustnessResultsTests
     [InlineData("sensitivity.criticalChanges.changes[0].current", JsonValueKind.Number)]
     [InlineData("sensitivity.criticalChanges.changes[0].reverses", JsonValueKind.False)]
     [InlineData("sensitivity.criticalChanges.changes[0].note", JsonValueKind.String)]
-    [InlineData("sensitivity.criticalChanges.mostCritical.topAbsolute.criterion", JsonValueKind.String)]
-    [InlineData("sensitivity.criticalChanges.mostCritical.topRelative.pair", JsonValueKind.Array)]
+    [InlineData("sensitivity.criticalChanges.mostCritical.topShare.criterion", JsonValueKind.String)]
+    [InlineData("sensitivity.criticalChanges.mostCritical.topShare.weight", JsonValueKind.Number)]
+    [InlineData("sensitivity.criticalChanges.mostCritical.topAbsolute", JsonValueKind.Null)]
+    [InlineData("sensitivity.criticalChanges.mostCritical.topRelative", JsonValueKind.Null)]
+    [InlineData("sensitivity.criticalChanges.mostCritical.anyRelative.pair", JsonValueKind.Array)]
     [InlineData("sensitivity.criticalChanges.mostCritical.anyAbsolute.absolute", JsonValueKind.Number)]
     [InlineData("sensitivity.criticalChanges.mostCritical.anyRelative.relative", JsonValueKind.Number)]
     [InlineData("sensitivity.criticalChanges.mostCritical.anyAbsolute.delta", JsonValueKind.Number)]
-    [InlineData("sensitivity.criticalChanges.mostCritical.topRelative.deltaRelative", JsonValueKind.Number)]
-    [InlineData("sensitivity.criticalChanges.mostCritical.topShare.weight", JsonValueKind.Number)]
+    [InlineData("sensitivity.criticalChanges.mostCritical.anyRelative.deltaRelative", JsonValueKind.Number)]
     [InlineData("sensitivity.criticalChanges.mostCritical.anyShare.absolute", JsonValueKind.Number)]
     [InlineData("sensitivity.acceptability[0].alternative", JsonValueKind.String)]
     [InlineData("sensitivity.acceptability[0].ranks", JsonValueKind.Array)]
@@ -189,12 +191,28 @@ public sealed class RobustnessResultsTests
     [Fact]
     public void The_most_critical_criterion_for_the_top_rank_is_led_by_the_winner()
     {
-        var top = At(BusStop.Value.Json, "sensitivity.criticalChanges.mostCritical.topAbsolute");
-        var expected = BusStop.Value.Robustness.Sensitivity.CriticalChanges.TopAbsolute!;
+        var top = At(BusStop.Value.Json, "sensitivity.criticalChanges.mostCritical.topShare");
+        var expected = BusStop.Value.Robustness.Sensitivity.CriticalChanges.TopShare!;
 
         Assert.Equal([BusStop.Value.Result.Ranking[0].Alternative, expected.Challenger], top.GetProperty("pair").EnumerateArray().Select(p => p.GetString()));
         Assert.Equal(expected.Criterion, top.GetProperty("criterion").GetString());
         Assert.Equal(expected.Weight, top.GetProperty("weight").GetDouble());
+    }
+
+    [Fact]
+    public void In_the_sample_the_winner_is_overtaken_only_if_a_weight_alone_rose_above_one()
+    {
+        // Every share that dethrones the winner lies above 1/(2 − current), so no change of one weight within [0, 1]
+        // does (Triantaphyllou & Sánchez's feasibility), and topAbsolute and topRelative are written as null.
+        var winner = BusStop.Value.Result.Ranking[0].Alternative;
+        var led = At(BusStop.Value.Json, "sensitivity.criticalChanges.changes").EnumerateArray()
+            .Where(c => c.GetProperty("pair")[0].GetString() == winner && c.GetProperty("reverses").GetBoolean()).ToArray();
+        Assert.NotEmpty(led);
+        Assert.All(led, c =>
+        {
+            Assert.False(c.TryGetProperty("delta", out _));
+            Assert.True(c.GetProperty("weight").GetDouble() > 1 / (2 - c.GetProperty("current").GetDouble()));
+        });
     }
 
     [Fact]
