@@ -66,7 +66,7 @@ internal static class RobustnessRenderer
         output.WriteLine();
         output.WriteLine("Most critical criteria (the smallest change of one criterion's weight that reverses a pair)");
         output.WriteLine("  change of share: the share the criterion must reach, the others keeping their proportions (what panels publish);");
-        output.WriteLine("  change of weight alone: Triantaphyllou & Sanchez (1997), the criterion's weight alone changed, then all renormalised to 100%");
+        output.WriteLine("  change of weight alone: Triantaphyllou & Sánchez (1997), the criterion's weight alone changed, then all renormalised to 100%");
         var table = new TextTable("Place", "Smallest", "Criterion", "Reversal", "Share now", "Reverses at", "Change of share", "Change of weight alone").AlignRight(4, 5);
         Row(table, "first", "change of share", c.TopShare, names);
         Row(table, "first", "weight alone", c.TopAbsolute, names);
@@ -81,7 +81,9 @@ internal static class RobustnessRenderer
     {
         if (m is null)
         {
-            table.Add(place, measured, "none", "no single weight change reverses such a pair", "", "", "", "");
+            table.Add(place, measured, "none",
+                measured == "change of share" ? "no single weight change reverses such a pair" : "no change of one weight alone, kept within 0-100%, reverses such a pair",
+                "", "", "", "");
             return;
         }
 

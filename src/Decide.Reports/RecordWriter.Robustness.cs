@@ -63,14 +63,14 @@ internal sealed partial class RecordWriter
         {
             _flow.Paragraph("The smallest change of one criterion's weight that puts the challenger ahead of the leader, in two measures. Change of share: the share the criterion must reach, the others keeping their proportions; this is the figure panels publish, and the one the screens show. Change of weight alone (Triantaphyllou and Sánchez 1997): the criterion's weight alone is changed, the others are left as they are, and then all are rescaled to 100%; the smallest such change whose weight stays between 0 and 100%. Both describe the same reversals: a weight w changed by d gives the share (w + d)/(1 + d). Smallest change of share first.", _style.Cell, _style.MutedBrush);
             _flow.Table(
-                [new("Criterion", 2.4), new("Leader", 2), new("Challenger", 2), new("Share now", 1, CellAlign.Right), new("Reverses at", 1, CellAlign.Right),
+                [new("Criterion", 2.3), new("Leader", 1.9), new("Challenger", 1.9), new("Share now", 1.05, CellAlign.Right), new("Reverses at", 1.25, CellAlign.Right),
                  new("Share change (points)", 1.1, CellAlign.Right), new("Share change (% of share)", 1.1, CellAlign.Right),
-                 new("Weight alone (points)", 1.1, CellAlign.Right), new("Weight alone (% of weight)", 1.1, CellAlign.Right)],
+                 new("Weight alone (points)", 1.2, CellAlign.Right), new("Weight alone (% of weight)", 1.1, CellAlign.Right)],
                 critical.Select(c => (IReadOnlyList<string>)
                 [
                     _names.Criterion(c.Criterion), _names.Alternative(c.Leader), _names.Alternative(c.Challenger), RecordText.Percent(c.Current),
                     RecordText.Percent(c.Weight!.Value), Signed((c.Weight.Value - c.Current) * 100, 1), Signed((c.Weight.Value - c.Current) / c.Current * 100, 0) + "%",
-                    c.Delta is { } d ? Signed(-d * 100, 1) + (c.DeltaShare != c.Weight ? $" (at {RecordText.Percent(c.DeltaShare!.Value)})" : "") : "above 100% only",
+                    c.Delta is { } d ? Signed(-d * 100, 1) + (c.DeltaShare != c.Weight ? $" (at {RecordText.Percent(c.DeltaShare!.Value)})" : "") : "needs weight above 100%",
                     c.DeltaRelative is { } r ? Signed(-r, 0) + "%" : "—",
                 ]));
 
@@ -86,12 +86,12 @@ internal sealed partial class RecordWriter
                     ("any place: weight alone", criticalChanges.AnyAbsolute),
                     ("any place: weight alone, % of it", criticalChanges.AnyRelative),
                 }.Select(x => (IReadOnlyList<string>)(x.Most is not { } m
-                    ? [x.Title, "none", "no single change of weight reverses such a pair", "", ""]
+                    ? [x.Title, "none", x.Title.EndsWith("share", StringComparison.Ordinal) ? "no single change of weight reverses such a pair" : "no change of this weight alone, kept within 0–100%, reverses such a pair", "", ""]
                     :
                     [
                         x.Title, _names.Criterion(m.Criterion), $"{_names.Alternative(m.Challenger)} overtakes {_names.Alternative(m.Leader)}",
                         $"{RecordText.Percent(m.Current)} → {RecordText.Percent(m.Weight)}",
-                        m.Delta is { } d ? $"{Signed(-d * 100, 1)} ({Signed(-m.DeltaRelative!.Value, 0)}%)" : "above 100% only",
+                        m.Delta is { } d ? $"{Signed(-d * 100, 1)} ({Signed(-m.DeltaRelative!.Value, 0)}%)" : "needs weight above 100%",
                     ])));
         }
 
