@@ -65,11 +65,15 @@ internal static class RobustnessRenderer
     {
         output.WriteLine();
         output.WriteLine("Most critical criteria (the smallest change of one criterion's weight that reverses a pair)");
-        var table = new TextTable("Place", "Measured", "Criterion", "Reversal", "Weight now", "Reverses at", "Change").AlignRight(4, 5);
-        Row(table, "first", "absolute", c.TopAbsolute, names);
-        Row(table, "first", "relative", c.TopRelative, names);
-        Row(table, "any", "absolute", c.AnyAbsolute, names);
-        Row(table, "any", "relative", c.AnyRelative, names);
+        output.WriteLine("  change of share: the share the criterion must reach, the others keeping their proportions (what panels publish);");
+        output.WriteLine("  change of weight alone: Triantaphyllou & Sánchez (1997), the criterion's weight alone changed, then all renormalised to 100%");
+        var table = new TextTable("Place", "Smallest", "Criterion", "Reversal", "Share now", "Reverses at", "Change of share", "Change of weight alone").AlignRight(4, 5);
+        Row(table, "first", "change of share", c.TopShare, names);
+        Row(table, "first", "weight alone", c.TopAbsolute, names);
+        Row(table, "first", "weight alone, % of it", c.TopRelative, names);
+        Row(table, "any", "change of share", c.AnyShare, names);
+        Row(table, "any", "weight alone", c.AnyAbsolute, names);
+        Row(table, "any", "weight alone, % of it", c.AnyRelative, names);
         table.Write(output);
     }
 
@@ -77,13 +81,18 @@ internal static class RobustnessRenderer
     {
         if (m is null)
         {
-            table.Add(place, measured, "none", "no single weight change reverses such a pair", "", "", "");
+            table.Add(place, measured, "none",
+                measured == "change of share" ? "no single weight change reverses such a pair" : "no change of one weight alone, kept within 0-100%, reverses such a pair",
+                "", "", "", "");
             return;
         }
 
         table.Add(place, measured, $"{m.Criterion} {names.Criterion(m.Criterion)}", $"{m.Challenger} overtakes {m.Leader}",
             Percent(m.Current), Percent(m.Weight),
-            string.Create(CultureInfo.InvariantCulture, $"{(m.Weight - m.Current) * 100:+0.0;-0.0} pp ({m.Relative:0.#}% of its weight)"));
+            string.Create(CultureInfo.InvariantCulture, $"{(m.Weight - m.Current) * 100:+0.0;-0.0} pp ({m.Relative:0.#}% of its share)"),
+            m.Delta is { } delta
+                ? string.Create(CultureInfo.InvariantCulture, $"{-delta * 100:+0.0;-0.0} pp ({-m.DeltaRelative!.Value:+0.#;-0.#}% of its weight)")
+                : "needs the weight above 100%");
     }
 
     private static void LeaveOneOut(IReadOnlyList<LeaveOneOutResult> results, Names names, TextWriter output)
@@ -142,7 +151,8 @@ internal static class RobustnessRenderer
         var table = new TextTable("Method", "Winner", "Tau", "Description").AlignRight(2);
         foreach (var m in methods)
         {
-            var winner = m.Ranking.Count > 0 ? $"{m.Ranking[0]} {names.Alternative(m.Ranking[0])}{(m.SameWinner ? "" : " (differs)")}" : "-";
+            var winner = m.Note is { } note ? note
+                : m.Ranking.Count > 0 ? $"{m.Ranking[0]} {names.Alternative(m.Ranking[0])}{(m.SameWinner ? "" : " (differs)")}" : "-";
             table.Add(m.Method, winner, m.KendallTau is { } tau ? F(tau, 3) : "n/a", m.Description);
         }
 

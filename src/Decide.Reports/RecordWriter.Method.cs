@@ -58,9 +58,10 @@ internal sealed partial class RecordWriter
 
         _flow.Heading("Robustness checks and software");
         var acceptability = _content.Robustness.Sensitivity.Acceptability;
-        _flow.Paragraph("Weight sweeps move one criterion's share from 0% to 100% with the others keeping their proportions; critical changes give the smallest change of one share that reverses a pair (Triantaphyllou and Sánchez 1997); rank acceptability draws weights and ratings at random within the panel's triangles"
+        _flow.Paragraph("Weight sweeps move one criterion's share from 0% to 100% with the others keeping their proportions; critical changes give the smallest change of one criterion's weight that reverses a pair, both as the share it must reach and as the change of that weight alone before rescaling (Triantaphyllou and Sánchez 1997); rank acceptability draws weights and ratings at random within the panel's triangles"
             + (acceptability.Draws > 0 ? $" ({acceptability.Draws.ToString("N0", CultureInfo.InvariantCulture)} draws, seed {acceptability.Seed.ToString(CultureInfo.InvariantCulture)}, so the figures can be reproduced)" : " (not run for this record)")
             + "; leave-one-out repeats the analysis without each assessor and without each alternative; panel agreement uses Kendall's W. All are diagnostic and change nothing.");
+        _flow.Paragraph("The method cross-check ranks the same inputs under the other aggregation rule, under the other ideal points, and by the weighted total of scores on the rating scale, the score procurement scoring rules assume: each rating's centre (l + m + u)/3 as a share of the top of the rating scale, each price or other number relative to the best bid (lowest ÷ value for a cost, value ÷ highest for a benefit; this one part is relative), each times the criterion's weight share. Unlike TOPSIS it does not divide a criterion's ratings by the best rating received. A method that cannot be applied to the evaluation is listed as not applicable, with the reason.");
         _flow.Paragraph($"Figures computed by Decide {_content.SoftwareVersion}. Anyone can recompute them from the embedded {EvaluationRecordDocument.AttachmentName} with the same version.");
     }
 

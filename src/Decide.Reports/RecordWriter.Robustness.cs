@@ -6,6 +6,9 @@ namespace Decide.Reports;
 
 internal sealed partial class RecordWriter
 {
+    private static string Signed(double value, int decimals) =>
+        (value >= 0 ? "+" : "−") + RecordText.Number(Math.Abs(value), decimals);
+
     private void Robustness()
     {
         _flow.Section("6 Robustness");
@@ -49,22 +52,47 @@ internal sealed partial class RecordWriter
             }
         }
 
-        var critical = sensitivity.CriticalChanges.Changes.Where(c => c.Reverses).OrderBy(c => c.Absolute).ToArray();
+        var criticalChanges = sensitivity.CriticalChanges;
+        var critical = criticalChanges.Changes.Where(c => c.Reverses).OrderBy(c => c.Absolute).ToArray();
         _flow.Heading("Critical changes of weight");
         if (critical.Length == 0)
         {
-            _flow.Paragraph("No change of a single criterion's share between 0% and 100% reverses any pair of adjacent alternatives.");
+            _flow.Paragraph("No change of a single criterion's share between 0% and 100% reverses any pair of alternatives.");
         }
         else
         {
-            _flow.Paragraph("The smallest change of one criterion's share that puts the challenger ahead of the leader, smallest first.", _style.Cell, _style.MutedBrush);
+            _flow.Paragraph("The smallest change of one criterion's weight that puts the challenger ahead of the leader, in two measures. Change of share: the share the criterion must reach, the others keeping their proportions; this is the figure panels publish, and the one the screens show. Change of weight alone (Triantaphyllou and Sánchez 1997): the criterion's weight alone is changed, the others are left as they are, and then all are rescaled to 100%; the smallest such change whose weight stays between 0 and 100%. Both describe the same reversals: a weight w changed by d gives the share (w + d)/(1 + d). Smallest change of share first.", _style.Cell, _style.MutedBrush);
             _flow.Table(
-                [new("Criterion", 2.6), new("Leader", 2.2), new("Challenger", 2.2), new("Share now", 1.1, CellAlign.Right), new("Reverses at", 1.1, CellAlign.Right), new("Change (points)", 1.2, CellAlign.Right), new("Change (% of share)", 1.3, CellAlign.Right)],
+                [new("Criterion", 2.3), new("Leader", 1.9), new("Challenger", 1.9), new("Share now", 1.05, CellAlign.Right), new("Reverses at", 1.25, CellAlign.Right),
+                 new("Share change (points)", 1.1, CellAlign.Right), new("Share change (% of share)", 1.1, CellAlign.Right),
+                 new("Weight alone (points)", 1.2, CellAlign.Right), new("Weight alone (% of weight)", 1.1, CellAlign.Right)],
                 critical.Select(c => (IReadOnlyList<string>)
                 [
                     _names.Criterion(c.Criterion), _names.Alternative(c.Leader), _names.Alternative(c.Challenger), RecordText.Percent(c.Current),
-                    RecordText.Percent(c.Weight!.Value), RecordText.Number(c.Absolute!.Value * 100, 1), RecordText.Number(c.Relative!.Value, 0) + "%",
+                    RecordText.Percent(c.Weight!.Value), Signed((c.Weight.Value - c.Current) * 100, 1), Signed((c.Weight.Value - c.Current) / c.Current * 100, 0) + "%",
+                    c.Delta is { } d ? Signed(-d * 100, 1) + (c.DeltaShare != c.Weight ? $" (at {RecordText.Percent(c.DeltaShare!.Value)})" : "") : "needs weight above 100%",
+                    c.DeltaRelative is { } r ? Signed(-r, 0) + "%" : "—",
                 ]));
+
+            _flow.Heading("Most critical criteria");
+            _flow.Table(
+                [new("Smallest", 4), new("Criterion", 2.4), new("Reversal", 3.6), new("Share now → at reversal", 2, CellAlign.Right), new("Weight alone (points, % of weight)", 2.2, CellAlign.Right)],
+                new (string Title, Decide.Core.Robustness.MostCriticalCriterion? Most)[]
+                {
+                    ("first place: change of share", criticalChanges.TopShare),
+                    ("first place: weight alone", criticalChanges.TopAbsolute),
+                    ("first place: weight alone, % of it", criticalChanges.TopRelative),
+                    ("any place: change of share", criticalChanges.AnyShare),
+                    ("any place: weight alone", criticalChanges.AnyAbsolute),
+                    ("any place: weight alone, % of it", criticalChanges.AnyRelative),
+                }.Select(x => (IReadOnlyList<string>)(x.Most is not { } m
+                    ? [x.Title, "none", x.Title.EndsWith("share", StringComparison.Ordinal) ? "no single change of weight reverses such a pair" : "no change of this weight alone, kept within 0–100%, reverses such a pair", "", ""]
+                    :
+                    [
+                        x.Title, _names.Criterion(m.Criterion), $"{_names.Alternative(m.Challenger)} overtakes {_names.Alternative(m.Leader)}",
+                        $"{RecordText.Percent(m.Current)} → {RecordText.Percent(m.Weight)}",
+                        m.Delta is { } d ? $"{Signed(-d * 100, 1)} ({Signed(-m.DeltaRelative!.Value, 0)}%)" : "needs weight above 100%",
+                    ])));
         }
 
         var acceptability = sensitivity.Acceptability;
@@ -128,11 +156,13 @@ internal sealed partial class RecordWriter
             _flow.Heading("Other methods");
             _flow.Table(
                 [new("Method", 4), new("Ranking", 6), new("Kendall τ", 1, CellAlign.Right), new("Same winner", 1.2)],
-                sensitivity.Methods.Select(m => (IReadOnlyList<string>)
-                [
-                    m.Description, string.Join(" > ", m.Ranking.Select(_names.Alternative)),
-                    m.KendallTau is { } tau ? RecordText.Number(tau, 2) : "—", m.SameWinner ? "yes" : "NO",
-                ]));
+                sensitivity.Methods.Select(m => (IReadOnlyList<string>)(m.Note is { } note
+                    ? [m.Description, note, "—", "—"]
+                    :
+                    [
+                        m.Description, string.Join(" > ", m.Ranking.Select(_names.Alternative)),
+                        m.KendallTau is { } tau ? RecordText.Number(tau, 2) : "—", m.SameWinner ? "yes" : "NO",
+                    ])));
         }
 
         var agreement = robustness.Agreement;

@@ -58,10 +58,16 @@ public sealed class RobustnessResultsTests
     [InlineData("sensitivity.criticalChanges.changes[0].current", JsonValueKind.Number)]
     [InlineData("sensitivity.criticalChanges.changes[0].reverses", JsonValueKind.False)]
     [InlineData("sensitivity.criticalChanges.changes[0].note", JsonValueKind.String)]
-    [InlineData("sensitivity.criticalChanges.mostCritical.topAbsolute.criterion", JsonValueKind.String)]
-    [InlineData("sensitivity.criticalChanges.mostCritical.topRelative.pair", JsonValueKind.Array)]
+    [InlineData("sensitivity.criticalChanges.mostCritical.topShare.criterion", JsonValueKind.String)]
+    [InlineData("sensitivity.criticalChanges.mostCritical.topShare.weight", JsonValueKind.Number)]
+    [InlineData("sensitivity.criticalChanges.mostCritical.topAbsolute", JsonValueKind.Null)]
+    [InlineData("sensitivity.criticalChanges.mostCritical.topRelative", JsonValueKind.Null)]
+    [InlineData("sensitivity.criticalChanges.mostCritical.anyRelative.pair", JsonValueKind.Array)]
     [InlineData("sensitivity.criticalChanges.mostCritical.anyAbsolute.absolute", JsonValueKind.Number)]
     [InlineData("sensitivity.criticalChanges.mostCritical.anyRelative.relative", JsonValueKind.Number)]
+    [InlineData("sensitivity.criticalChanges.mostCritical.anyAbsolute.delta", JsonValueKind.Number)]
+    [InlineData("sensitivity.criticalChanges.mostCritical.anyRelative.deltaRelative", JsonValueKind.Number)]
+    [InlineData("sensitivity.criticalChanges.mostCritical.anyShare.absolute", JsonValueKind.Number)]
     [InlineData("sensitivity.acceptability[0].alternative", JsonValueKind.String)]
     [InlineData("sensitivity.acceptability[0].ranks", JsonValueKind.Array)]
     [InlineData("sensitivity.acceptability[0].intervals[0]", JsonValueKind.Array)]
@@ -162,22 +168,51 @@ public sealed class RobustnessResultsTests
         });
         Assert.All(reversing, c =>
         {
-            Assert.False(c.TryGetProperty("note", out _));
             var delta = Math.Abs(c.GetProperty("weight").GetDouble() - c.GetProperty("current").GetDouble());
             Assert.Equal(delta, c.GetProperty("absolute").GetDouble(), 12);
             Assert.Equal(delta / c.GetProperty("current").GetDouble() * 100, c.GetProperty("relative").GetDouble(), 9);
+            if (c.TryGetProperty("delta", out var tsDelta))
+            {
+                Assert.False(c.TryGetProperty("note", out _));
+                // Triantaphyllou & Sánchez: the weight alone w − δ, renormalised by 1 − δ, is the share at which the pair swaps.
+                var w = c.GetProperty("current").GetDouble();
+                var share = c.GetProperty("deltaShare").GetDouble();
+                Assert.Equal(share, (w - tsDelta.GetDouble()) / (1 - tsDelta.GetDouble()), 9);
+                Assert.InRange(w - tsDelta.GetDouble(), 0, 1);
+                Assert.Equal(tsDelta.GetDouble() / w * 100, c.GetProperty("deltaRelative").GetDouble(), 9);
+            }
+            else
+            {
+                Assert.Equal("reverses only if this criterion's weight alone rose above 1 before renormalising", c.GetProperty("note").GetString());
+            }
         });
     }
 
     [Fact]
     public void The_most_critical_criterion_for_the_top_rank_is_led_by_the_winner()
     {
-        var top = At(BusStop.Value.Json, "sensitivity.criticalChanges.mostCritical.topAbsolute");
-        var expected = BusStop.Value.Robustness.Sensitivity.CriticalChanges.TopAbsolute!;
+        var top = At(BusStop.Value.Json, "sensitivity.criticalChanges.mostCritical.topShare");
+        var expected = BusStop.Value.Robustness.Sensitivity.CriticalChanges.TopShare!;
 
         Assert.Equal([BusStop.Value.Result.Ranking[0].Alternative, expected.Challenger], top.GetProperty("pair").EnumerateArray().Select(p => p.GetString()));
         Assert.Equal(expected.Criterion, top.GetProperty("criterion").GetString());
         Assert.Equal(expected.Weight, top.GetProperty("weight").GetDouble());
+    }
+
+    [Fact]
+    public void In_the_sample_the_winner_is_overtaken_only_if_a_weight_alone_rose_above_one()
+    {
+        // Every share that dethrones the winner lies above 1/(2 − current), so no change of one weight within [0, 1]
+        // does (Triantaphyllou & Sánchez's feasibility), and topAbsolute and topRelative are written as null.
+        var winner = BusStop.Value.Result.Ranking[0].Alternative;
+        var led = At(BusStop.Value.Json, "sensitivity.criticalChanges.changes").EnumerateArray()
+            .Where(c => c.GetProperty("pair")[0].GetString() == winner && c.GetProperty("reverses").GetBoolean()).ToArray();
+        Assert.NotEmpty(led);
+        Assert.All(led, c =>
+        {
+            Assert.False(c.TryGetProperty("delta", out _));
+            Assert.True(c.GetProperty("weight").GetDouble() > 1 / (2 - c.GetProperty("current").GetDouble()));
+        });
     }
 
     [Fact]
@@ -334,7 +369,7 @@ public sealed class RobustnessResultsTests
         var most = At(analysed.Json, "sensitivity.criticalChanges.mostCritical");
 
         Assert.Null(analysed.Robustness.Sensitivity.CriticalChanges.AnyAbsolute);
-        Assert.Equal(["topAbsolute", "topRelative", "anyAbsolute", "anyRelative"], most.EnumerateObject().Select(p => p.Name));
+        Assert.Equal(["topAbsolute", "topRelative", "anyAbsolute", "anyRelative", "topShare", "anyShare"], most.EnumerateObject().Select(p => p.Name));
         Assert.All(most.EnumerateObject(), p => Assert.Equal(JsonValueKind.Null, p.Value.ValueKind));
         Schemas.AssertValid(Schemas.Results, analysed.Text);
     }

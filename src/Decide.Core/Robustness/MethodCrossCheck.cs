@@ -1,23 +1,37 @@
 using Decide.Core.Analysis;
-using Decide.Core.Fuzzy;
 using Decide.Core.Model;
 using Decide.Core.Ranking;
 
 namespace Decide.Core.Robustness;
 
 /// <summary>
-/// Re-ranks under the other aggregation rule, the other ideal points, and the fuzzy weighted sum, each compared
-/// with the main ranking by Kendall's tau-b.
+/// Re-ranks under the other aggregation rule, the other ideal points, and the conventional weighted total of scores
+/// on the rating scale, each compared with the main ranking by Kendall's tau-b.
 /// </summary>
 /// <remarks>
-/// The fuzzy weighted sum (simple additive weighting) scores Sᵢ = centroid(Σⱼ ṽᵢⱼ) on the same normalised weighted
-/// matrix TOPSIS uses: the conventional weighted-total score that procurement rules assume. Agreement between the
-/// methods is reassurance, not proof; disagreement is a reason to look closer at the leading bids.
+/// The weighted total is the score procurement scoring rules assume, and it is computed without TOPSIS's
+/// normalisation or ideal points: Tᵢ = Σⱼ ŵⱼ sᵢⱼ with ŵ the crisp weight shares and, for a linguistic criterion,
+/// sᵢⱼ = centroid(x̃ᵢⱼ) / the top of the rating scale's declared range (an absolute score: it does not depend on the
+/// other bids), or 1 minus that for a linguistic cost criterion; for a numeric criterion the relative ratio sᵢⱼ = minᵢ xᵢⱼ / xᵢⱼ (cost) or xᵢⱼ / maxᵢ xᵢⱼ (benefit;
+/// 0 when every value is 0), the one relative part. Where the alternative method cannot be applied to the evaluation
+/// (the engine refuses it), the comparison says why instead of failing. Agreement between methods is reassurance,
+/// not proof; disagreement is a reason to look closer at the leading bids.
 /// </remarks>
 public static class MethodCrossCheck
 {
-    /// <summary>Three comparisons: other aggregation, other ideal points, weighted sum.</summary>
-    public static IReadOnlyList<MethodComparison> Run(PreparedEvaluation prepared, AnalysisResult baseResult)
+    /// <summary>The method id of the weighted total.</summary>
+    public const string WeightedTotalMethod = "weighted-total";
+
+    /// <summary>The weighted total in words.</summary>
+    public const string WeightedTotalDescription =
+        "weighted total of scores on the rating scale (each rating's centre as a share of the scale's top; prices and other numbers relative to the best bid), with the crisp weight shares";
+
+    /// <summary>Three comparisons: other aggregation, other ideal points, weighted total.</summary>
+    public static IReadOnlyList<MethodComparison> Run(PreparedEvaluation prepared, AnalysisResult baseResult) =>
+        Run(prepared, baseResult, DecisionEngine.Analyze);
+
+    /// <summary>As <see cref="Run(PreparedEvaluation, AnalysisResult)"/>, analysing each TOPSIS variant with <paramref name="analyze"/>.</summary>
+    internal static IReadOnlyList<MethodComparison> Run(PreparedEvaluation prepared, AnalysisResult baseResult, Func<Evaluation, AnalysisResult> analyze)
     {
         var options = prepared.Source.Options;
         var main = prepared.Alternatives.Select(a => baseResult.Ranking.Single(r => r.Alternative == a.Id).Closeness).ToArray();
@@ -25,48 +39,78 @@ public static class MethodCrossCheck
 
         var otherAggregation = options.Aggregation == AggregationRule.Mean ? AggregationRule.Geometric : AggregationRule.Mean;
         var otherIdeal = options.Ideal == IdealPoints.Unit ? IdealPoints.Extreme : IdealPoints.Unit;
-        var results = new List<MethodComparison>();
-        var aggregationVariant = prepared.Source with { Options = options with { Aggregation = otherAggregation } };
-        if (EvaluationValidator.Validate(aggregationVariant).Count == 0)
-        {
-            results.Add(Compare(prepared, main, winner, $"aggregation:{Name(otherAggregation)}",
+        return
+        [
+            Topsis(prepared, main, winner, $"aggregation:{Name(otherAggregation)}",
                 otherAggregation == AggregationRule.Geometric ? "geometric mean of the assessors' ratings" : "arithmetic mean of the assessors' ratings",
-                TopsisCloseness(aggregationVariant, prepared)));
-        }
-
-        results.Add(Compare(prepared, main, winner, $"ideal:{Name(otherIdeal)}",
-            otherIdeal == IdealPoints.Extreme ? "ideal points at the best and worst weighted values received" : "ideal points (1,1,1) and (0,0,0)",
-            TopsisCloseness(prepared.Source with { Options = options with { Ideal = otherIdeal } }, prepared)));
-        results.Add(Compare(prepared, main, winner, "weighted-sum", "fuzzy weighted sum of the normalised ratings, defuzzified by centroid",
-            WeightedSum(prepared)));
-        return results;
+                prepared.Source with { Options = options with { Aggregation = otherAggregation } }, analyze),
+            Topsis(prepared, main, winner, $"ideal:{Name(otherIdeal)}",
+                otherIdeal == IdealPoints.Extreme ? "ideal points at the best and worst weighted values received" : "ideal points (1,1,1) and (0,0,0)",
+                prepared.Source with { Options = options with { Ideal = otherIdeal } }, analyze),
+            Compare(prepared, main, winner, WeightedTotalMethod, WeightedTotalDescription, WeightedTotal(prepared)),
+        ];
     }
 
-    /// <summary>Sᵢ = centroid(Σⱼ ṽᵢⱼ) per alternative, in input order.</summary>
-    public static double[] WeightedSum(PreparedEvaluation prepared)
+    /// <summary>
+    /// The weighted total Tᵢ = Σⱼ ŵⱼ sᵢⱼ per alternative, in input order, in [0, 1]: sᵢⱼ = centroid of the aggregated
+    /// (or moderated) cell / the rating scale's maximum for a linguistic criterion (1 minus that for a linguistic cost); minᵢ xᵢⱼ / xᵢⱼ for a numeric cost
+    /// and xᵢⱼ / maxᵢ xᵢⱼ for a numeric benefit (0 when the maximum is 0); ŵ the crisp weight shares.
+    /// </summary>
+    public static double[] WeightedTotal(PreparedEvaluation prepared)
     {
         int n = prepared.Alternatives.Count, m = prepared.Criteria.Count;
-        var weighted = new Tfn[n * m];
-        FuzzyTopsis.Normalise(prepared.Matrix, n, m, prepared.IsCost, prepared.FuzzyWeights, weighted);
+        var top = prepared.Source.RatingScale.Maximum;
         var scores = new double[n];
-        for (var i = 0; i < n; i++)
+        for (var j = 0; j < m; j++)
         {
-            var sum = Tfn.Zero;
-            for (var j = 0; j < m; j++)
+            var share = prepared.Weights[j].Crisp;
+            if (prepared.Criteria[j].Kind == CriterionKind.Numeric)
             {
-                sum += weighted[(i * m) + j];
-            }
+                double lowest = double.PositiveInfinity, highest = double.NegativeInfinity;
+                for (var i = 0; i < n; i++)
+                {
+                    lowest = Math.Min(lowest, prepared.Values[(i * m) + j]);
+                    highest = Math.Max(highest, prepared.Values[(i * m) + j]);
+                }
 
-            scores[i] = sum.Centroid;
+                for (var i = 0; i < n; i++)
+                {
+                    var x = prepared.Values[(i * m) + j];
+                    scores[i] += share * (prepared.IsCost[j] ? lowest / x : highest > 0 ? x / highest : 0);
+                }
+            }
+            else
+            {
+                for (var i = 0; i < n; i++)
+                {
+                    // A linguistic cost (a risk rated on the scale) scores what it falls short of the top by.
+                    var centre = prepared.Matrix[(i * m) + j].Centroid / top;
+                    scores[i] += share * (prepared.IsCost[j] ? 1 - centre : centre);
+                }
+            }
         }
 
         return scores;
     }
 
-    private static double[] TopsisCloseness(Evaluation variant, PreparedEvaluation prepared)
+    private static MethodComparison Topsis(
+        PreparedEvaluation prepared, double[] main, string? winner, string method, string description, Evaluation variant,
+        Func<Evaluation, AnalysisResult> analyze)
     {
-        var result = DecisionEngine.Analyze(variant);
-        return prepared.Alternatives.Select(a => result.Ranking.Single(r => r.Alternative == a.Id).Closeness).ToArray();
+        AnalysisResult result;
+        try
+        {
+            result = analyze(variant);
+        }
+        catch (InvalidEvaluationException refused)
+        {
+            var reasons = refused.Errors.Select(e => e.Reason.TrimEnd('.')).Distinct(StringComparer.Ordinal).ToArray();
+            var why = string.Join("; ", reasons.Take(3)) + (reasons.Length > 3 ? $"; and {reasons.Length - 3} more" : "");
+            return new MethodComparison(method, description, [], [], null, false, $"not applicable: {why}");
+        }
+
+        var scores = prepared.Alternatives.Select(a => result.Ranking.Single(r => r.Alternative == a.Id).Closeness).ToArray();
+        return Compare(prepared, main, winner, method, description, scores);
     }
 
     private static MethodComparison Compare(

@@ -91,7 +91,7 @@ public static class RobustnessSummary
 
     private static void Critical(List<string> lines, CriticalChangesResult critical, Dictionary<string, string> names, Dictionary<string, string> criteria)
     {
-        if (critical.TopAbsolute is not { } most)
+        if (critical.TopShare is not { } most)
         {
             lines.Add("No change of any single criterion's weight, from 0% to 100%, moves the leader from first place.");
             return;
@@ -122,10 +122,20 @@ public static class RobustnessSummary
             return;
         }
 
-        var differing = methods.Where(m => !m.SameWinner).ToArray();
-        lines.Add(differing.Length == 0
-            ? "The conventional weighted sum, the other aggregation rule and the other ideal points all give the same winner."
-            : string.Join(" ", differing.Select(m => $"Under the {m.Description}, {names[m.Ranking[0]]} would rank first.")));
+        var applied = methods.Where(m => m.Applicable).ToArray();
+        var differing = applied.Where(m => !m.SameWinner).ToArray();
+        var sentence = applied.Length == 0 ? ""
+            : differing.Length == 0
+                ? applied.Length == methods.Count
+                    ? "The weighted total of scores on the rating scale, the other aggregation rule and the other ideal points all give the same winner."
+                    : "The other methods that can be applied give the same winner."
+                : string.Join(" ", differing.Select(m => $"Under the {m.Description}, {names[m.Ranking[0]]} would rank first."));
+        var notApplicable = methods.Where(m => !m.Applicable).Select(m => $"The check by {m.Description} is {m.Note}.");
+        var text = string.Join(" ", new[] { sentence }.Concat(notApplicable).Where(t => t.Length > 0));
+        if (text.Length > 0)
+        {
+            lines.Add(text);
+        }
     }
 
     private static void Agreement(List<string> lines, PanelAgreementResult agreement)

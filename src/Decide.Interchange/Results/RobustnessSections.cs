@@ -29,7 +29,7 @@ internal static class RobustnessSections
                 w.Alternative, w.Ranking.ToArray(),
                 w.Reversals.Select(r => new OrderReversalEntry(r.WasAhead, r.NowAhead)).ToArray())).ToArray(),
             s.Methods.Select(m => new MethodComparisonEntry(
-                m.Method, m.Description, m.Ranking.ToArray(), m.Scores.ToArray(), m.KendallTau, m.SameWinner)).ToArray());
+                m.Method, m.Description, m.Ranking.ToArray(), m.Scores.ToArray(), m.KendallTau, m.SameWinner, m.Note)).ToArray());
     }
 
     public static AgreementSection Agreement(PanelAgreementResult a)
@@ -47,13 +47,13 @@ internal static class RobustnessSections
 
     private static CriticalChangesEntry CriticalChanges(CriticalChangesResult c) => new(
         c.Changes.Select(x => new CriticalChangeEntry(
-            x.Criterion, [x.Leader, x.Challenger], x.Current, x.Weight, x.Absolute, x.Relative, x.Reverses,
-            x.Reverses ? null : CriticalChange.NoReversal)).ToArray(),
-        new MostCriticalEntry(Most(c.TopAbsolute), Most(c.TopRelative), Most(c.AnyAbsolute), Most(c.AnyRelative)));
+            x.Criterion, [x.Leader, x.Challenger], x.Current, x.Weight, x.Absolute, x.Relative, x.Delta, x.DeltaRelative, x.DeltaShare,
+            x.Reverses, !x.Reverses ? CriticalChange.NoReversal : x.Delta is null ? CriticalChange.NoFeasibleDelta : null)).ToArray(),
+        new MostCriticalEntry(Most(c.TopAbsolute), Most(c.TopRelative), Most(c.AnyAbsolute), Most(c.AnyRelative), Most(c.TopShare), Most(c.AnyShare)));
 
     private static MostCriticalCriterionEntry? Most(MostCriticalCriterion? m) => m is null
         ? null
-        : new MostCriticalCriterionEntry(m.Criterion, [m.Leader, m.Challenger], m.Current, m.Weight, m.Absolute, m.Relative);
+        : new MostCriticalCriterionEntry(m.Criterion, [m.Leader, m.Challenger], m.Current, m.Weight, m.Absolute, m.Relative, m.Delta, m.DeltaRelative);
 
     /// <summary>Pairs keys with values, keeping their order (the first of a repeated key wins).</summary>
     private static Dictionary<string, T> Map<T>(IEnumerable<string> keys, IEnumerable<T> values)

@@ -37,7 +37,7 @@ public sealed class RobustnessAnalysisTests
         var prepared = DecisionEngine.Prepare(RobustnessFixtures.TradeOff());
         var result = prepared.Analyze();
         var robustness = RobustnessAnalysis.Run(prepared, result, new RobustnessOptions(1000, 1));
-        var most = robustness.Sensitivity.CriticalChanges.TopAbsolute!;
+        var most = robustness.Sensitivity.CriticalChanges.TopShare!;
         var sentence = Assert.Single(robustness.Summary, s => s.StartsWith("The closest challenge", StringComparison.Ordinal));
         Assert.Contains($"Criterion {most.Criterion[1..]}", sentence);
         Assert.Contains($"{most.Weight * 100:0}%", sentence);
@@ -50,7 +50,7 @@ public sealed class RobustnessAnalysisTests
             [["VG", "VG", "G"], ["MP", "F", "P"], ["F", "MP", "MP"]], ["H", "M", "VH"]));
         var result = prepared.Analyze();
         var robustness = RobustnessAnalysis.Run(prepared, result, new RobustnessOptions(2000, 4));
-        Assert.Null(robustness.Sensitivity.CriticalChanges.TopAbsolute);
+        Assert.Null(robustness.Sensitivity.CriticalChanges.TopShare);
         Assert.Equal(1.0, robustness.Sensitivity.Acceptability.Alternatives[0].Ranks[0]);
         Assert.All(robustness.Sensitivity.LeaveOneOut, l => Assert.False(l.WinnerChanged));
         Assert.Contains(robustness.Summary, s => s.StartsWith("No change of any single criterion", StringComparison.Ordinal));

@@ -1,0 +1,38 @@
+using System.Globalization;
+
+namespace Decide.Reports.Tests;
+
+/// <summary>The record prints both measures of a critical change and names the weighted total of the cross-check.</summary>
+public sealed class RecordRobustnessMeasuresTests
+{
+    private static readonly PdfText Text = PdfText.Of(SampleRecords.SignedBusStop);
+
+    [Fact]
+    public void The_most_critical_criteria_are_printed_as_the_share_reached_and_as_the_change_of_the_weight_alone()
+    {
+        var critical = SampleRecords.BusStop.Robustness.Sensitivity.CriticalChanges;
+        var any = critical.AnyAbsolute!;
+
+        // The weight alone changes by −δ (Triantaphyllou & Sánchez: the weight becomes w − δ before renormalising).
+        var weightAlone = $"{Signed(-any.Delta!.Value * 100, 1)} ({Signed(-any.DeltaRelative!.Value, 0)}%)";
+        var share = $"{Percent(any.Current)} → {Percent(any.Weight)}";
+        Assert.Contains(PdfText.Squeeze("any place: weight alone"), Text.Squeezed);
+        Assert.Contains(PdfText.Squeeze(share + weightAlone), Text.Squeezed);
+        if (critical.TopAbsolute is null)
+        {
+            Assert.Contains(PdfText.Squeeze("first place: weight alone none no change of this weight alone, kept within 0–100%, reverses such a pair"), Text.Squeezed);
+        }
+    }
+
+    [Fact]
+    public void The_method_cross_check_names_the_weighted_total_of_scores_on_the_rating_scale()
+    {
+        Assert.Contains(PdfText.Squeeze("weighted total of scores on the rating scale"), Text.Squeezed);
+        Assert.DoesNotContain(PdfText.Squeeze("weighted sum"), Text.Squeezed);
+    }
+
+    private static string Signed(double value, int decimals) =>
+        (value >= 0 ? "+" : "−") + Math.Abs(value).ToString("F" + decimals, CultureInfo.InvariantCulture);
+
+    private static string Percent(double share) => (share * 100).ToString("F1", CultureInfo.InvariantCulture) + "%";
+}
