@@ -17,6 +17,9 @@ public sealed class DecideDbContext(DbContextOptions<DecideDbContext> options)
     // Audit entries added through AuditChain.Append, in the order added; they are chained when the context saves.
     private readonly List<AuditEntry> appended = [];
 
+    // Rows whose children changed, to be given the next version at the next save (MarkChanged).
+    private readonly HashSet<IVersioned> marked = new(ReferenceEqualityComparer.Instance);
+
     public DbSet<StoredEvaluation> Evaluations => Set<StoredEvaluation>();
 
     public DbSet<PanelMember> PanelMembers => Set<PanelMember>();
@@ -45,12 +48,14 @@ public sealed class DecideDbContext(DbContextOptions<DecideDbContext> options)
     public DbSet<DataProtectionKey> DataProtectionKeys => Set<DataProtectionKey>();
 
     /// <summary>
-    /// Saves, after refusing any text longer than its column (<see cref="TextLimits"/>), chaining any new audit entries
+    /// Saves, after refusing any text longer than its column (<see cref="TextLimits"/>) and moving the version of every
+    /// changed row (<see cref="IVersioned"/>), chaining any new audit entries
     /// after the last entry of their chain under the chain's lock (see <see cref="ChainedSave"/>).
     /// </summary>
     public override Task<int> SaveChangesAsync(bool acceptAllChangesOnSuccess, CancellationToken cancellationToken = default)
     {
         TextLimits.RequireWithin(this);
+        NextVersions();
         var added = appended.Where(e => Entry(e).State == EntityState.Added).ToList();
         return ChainedSave.SaveAsync(this, added, base.SaveChangesAsync, acceptAllChangesOnSuccess, cancellationToken);
     }
@@ -59,12 +64,37 @@ public sealed class DecideDbContext(DbContextOptions<DecideDbContext> options)
     public override int SaveChanges(bool acceptAllChangesOnSuccess)
     {
         TextLimits.RequireWithin(this);
+        NextVersions();
         if (appended.Any(e => Entry(e).State == EntityState.Added))
         {
             throw new InvalidOperationException("Audit entries are chained under a lock and must be saved with SaveChangesAsync.");
         }
 
         return base.SaveChanges(acceptAllChangesOnSuccess);
+    }
+
+    /// <summary>
+    /// Marks a row as changed although none of its own columns did (its panel, bids or approvals did), so that the
+    /// save gives it the next version and a client holding the old one is refused.
+    /// </summary>
+    public void MarkChanged(IVersioned row) => marked.Add(row);
+
+    /// <summary>
+    /// Gives every changed versioned row the next version, unless the caller set one itself. The version read stays the
+    /// concurrency token, so a row changed elsewhere meanwhile fails the save instead of being overwritten.
+    /// </summary>
+    private void NextVersions()
+    {
+        foreach (var entry in ChangeTracker.Entries<IVersioned>())
+        {
+            var changed = entry.State == EntityState.Modified || (entry.State == EntityState.Unchanged && marked.Contains(entry.Entity));
+            if (changed && !entry.Property(e => e.Version).IsModified)
+            {
+                entry.Entity.Version++;
+            }
+        }
+
+        marked.Clear();
     }
 
     /// <summary>Adds an entry to be chained at the next save (see <see cref="AuditChain.Append"/>).</summary>

@@ -20,7 +20,7 @@ public sealed class ConflictDeclaration
 }
 
 /// <summary>An assessor's importance term for a criterion or group, or a pairwise judgement.</summary>
-public sealed class WeightJudgement
+public sealed class WeightJudgement : IVersioned
 {
     public long Id { get; set; }
 
@@ -56,7 +56,7 @@ public sealed class WeightJudgement
 /// An assessor's rating of one bid on one linguistic criterion: a term with its rationale, or a declined cell with
 /// the reason. Never overwritten by moderation.
 /// </summary>
-public sealed class RatingEntry
+public sealed class RatingEntry : IVersioned
 {
     public long Id { get; set; }
 
@@ -80,7 +80,7 @@ public sealed class RatingEntry
 }
 
 /// <summary>A measured value of a numeric criterion (price, days) for one bid.</summary>
-public sealed class NumericEntry
+public sealed class NumericEntry : IVersioned
 {
     public long Id { get; set; }
 
@@ -100,7 +100,7 @@ public sealed class NumericEntry
 }
 
 /// <summary>The pass/fail result of a gate for one bid.</summary>
-public sealed class GateEntry
+public sealed class GateEntry : IVersioned
 {
     public long Id { get; set; }
 

@@ -1,7 +1,7 @@
 namespace Decide.Data.Entities;
 
 /// <summary>A person's place on one evaluation's panel.</summary>
-public sealed class PanelMember
+public sealed class PanelMember : IVersioned
 {
     public long Id { get; set; }
 

@@ -5,7 +5,7 @@ namespace Decide.Data.Entities;
 /// options — is held as a <c>decide-evaluation/1</c> document without panel, bids or inputs (<see cref="PlanJson"/>);
 /// it is edited as a whole during setup and frozen, with its SHA-256, when the plan is locked.
 /// </summary>
-public sealed class StoredEvaluation
+public sealed class StoredEvaluation : IVersioned
 {
     public Guid Id { get; set; }
 

@@ -166,7 +166,7 @@ public sealed class EvaluationService(
             var old = m.Evaluation.PlanJson;
             m.Evaluation.PlanJson = EvaluationFileWriter.ToJson(plan);
             m.Evaluation.Title = plan.Evaluation.Title;
-            m.Evaluation.Version++;
+            db.MarkChanged(m.Evaluation); // a plan saved unchanged still moves the version, as every save does
             audit.Record(db, id, new AuditEvent("plan.updated", $"evaluations/{id}/plan", old, m.Evaluation.PlanJson));
             await SaveAsync(db, m.Evaluation, ct);
             return Summarise(m.Evaluation, m.Roles);
@@ -249,7 +249,7 @@ public sealed class EvaluationService(
             var before = Describe(m.Evaluation.Panel);
             db.PanelMembers.RemoveRange(m.Evaluation.Panel.Where(p => p.Role != PanelRole.Facilitator));
             db.PanelMembers.AddRange(seats);
-            m.Evaluation.Version++;
+            db.MarkChanged(m.Evaluation); // the panel is the evaluation's: holders of the old version are refused
             audit.Record(db, id, new AuditEvent("panel.updated", $"evaluations/{id}/panel", before,
                 Describe(m.Evaluation.Panel.Where(p => p.Role == PanelRole.Facilitator).Concat(seats))));
             await SaveAsync(db, m.Evaluation, ct);
@@ -301,7 +301,7 @@ public sealed class EvaluationService(
             {
                 EvaluationId = id, Code = a.Code.Trim(), Name = a.Name.Trim(), Position = i, AddedAt = now,
             }));
-            m.Evaluation.Version++;
+            db.MarkChanged(m.Evaluation); // the bids are the evaluation's
             audit.Record(db, id, new AuditEvent("alternatives.updated", $"evaluations/{id}/alternatives", before,
                 string.Join("; ", request.Alternatives.Select(a => $"{a.Code.Trim()}={a.Name.Trim()}"))));
             await SaveAsync(db, m.Evaluation, ct);
@@ -432,7 +432,6 @@ public sealed class EvaluationService(
             }));
             old.Stage = EvaluationStage.Superseded;
             old.SupersededById = next.Id;
-            old.Version++;
             audit.Record(db, old.Id, new AuditEvent("revision.opened", $"evaluations/{old.Id}", $"revision {old.Revision}",
                 $"revision {next.Revision} ({next.Id}): {next.RevisionReason}"));
             audit.Record(db, next.Id, new AuditEvent("evaluation.created", $"evaluations/{next.Id}", null,
@@ -458,7 +457,7 @@ public sealed class EvaluationService(
             var before = m.Evaluation.LegalHold;
             m.Evaluation.LegalHold = request.Hold;
             m.Evaluation.LegalHoldReason = request.Reason.Trim();
-            m.Evaluation.Version++;
+            db.MarkChanged(m.Evaluation);
             audit.Record(db, id, new AuditEvent(request.Hold ? "legal-hold.set" : "legal-hold.lifted", $"evaluations/{id}",
                 before.ToString(), $"{request.Hold}: {request.Reason.Trim()}"));
             await SaveAsync(db, m.Evaluation, ct);
@@ -547,7 +546,6 @@ public sealed class EvaluationService(
             CheckVersion(m.Evaluation, request.Version);
             var warnings = await check(db, m);
             m.Evaluation.Stage = to;
-            m.Evaluation.Version++;
             audit.Record(db, id, new AuditEvent(auditAction, $"evaluations/{id}", from.ToString(),
                 to + (warnings.Count > 0 ? $" (warnings: {string.Join(" ", warnings)})" : "")));
             await SaveAsync(db, m.Evaluation, ct);

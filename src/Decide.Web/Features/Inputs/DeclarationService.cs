@@ -74,7 +74,6 @@ public sealed class DeclarationService(
             {
                 seat.DeclarationSignedAt = now;
                 seat.DeclarationVersion = Declaration.Version;
-                seat.Version++;
             }
 
             audit.Record(db, id, new AuditEvent("declaration.signed", $"declarations/{x.Code}",
@@ -120,7 +119,6 @@ public sealed class DeclarationService(
             foreach (var seat in x.Seats)
             {
                 seat.NamesConfirmedAt = now;
-                seat.Version++;
             }
 
             audit.Record(db, id, new AuditEvent("declaration.names-confirmed", $"declarations/{x.Code}", null,
@@ -224,7 +222,6 @@ public sealed class DeclarationService(
                 rating.Rationale = null;
                 rating.DeclinedReason = Declaration.RecusalReason;
                 rating.UpdatedAt = now;
-                rating.Version++;
                 audit.Record(db, x.Id, new AuditEvent("rating.recused", target, old, InputStore.Describe(rating)));
             }
             else

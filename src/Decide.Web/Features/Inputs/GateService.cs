@@ -71,7 +71,7 @@ public sealed class GateService(
             var old = Describe(row);
             if (row is null)
             {
-                row = new GateEntry { EvaluationId = id, AlternativeCode = bidder.Code, CriterionId = c.Id };
+                row = new GateEntry { EvaluationId = id, AlternativeCode = bidder.Code, CriterionId = c.Id, Version = 1 };
                 db.GateResults.Add(row);
             }
 
@@ -79,7 +79,6 @@ public sealed class GateService(
             row.Note = string.IsNullOrWhiteSpace(request.Note) ? null : request.Note.Trim();
             row.EnteredBy = user.Id;
             row.UpdatedAt = clock.GetUtcNow();
-            row.Version++;
             audit.Record(db, id, new AuditEvent("gate.saved", $"gates/{bidder.Code}/{c.Id}", old, Describe(row)));
             await InputStore.SaveAsync(db, what, () => CurrentAsync(id, bidder.Code, c.Id, ct), ct);
             return Cell(row, await NumericValueService.NamesAsync(db, [user.Id], ct));

@@ -72,14 +72,13 @@ public sealed class NumericValueService(
             var old = row is null ? null : Format(row.Value, c);
             if (row is null)
             {
-                row = new NumericEntry { EvaluationId = id, AlternativeCode = bidder.Code, CriterionId = c.Id };
+                row = new NumericEntry { EvaluationId = id, AlternativeCode = bidder.Code, CriterionId = c.Id, Version = 1 };
                 db.NumericValues.Add(row);
             }
 
             row.Value = value;
             row.EnteredBy = user.Id;
             row.UpdatedAt = clock.GetUtcNow();
-            row.Version++;
             audit.Record(db, id, new AuditEvent("value.saved", $"values/{bidder.Code}/{c.Id}", old, Format(value, c)));
             await InputStore.SaveAsync(db, what, () => CurrentAsync(id, bidder.Code, c.Id, ct), ct);
             return Cell(row, await NamesAsync(db, [user.Id], ct));

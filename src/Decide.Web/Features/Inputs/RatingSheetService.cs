@@ -74,7 +74,7 @@ public sealed class RatingSheetService(
             var now = clock.GetUtcNow();
             if (row is null)
             {
-                row = new RatingEntry { EvaluationId = id, AssessorCode = code, AlternativeCode = bidder.Code, CriterionId = c.Id, Version = 0 };
+                row = new RatingEntry { EvaluationId = id, AssessorCode = code, AlternativeCode = bidder.Code, CriterionId = c.Id, Version = 1 };
                 db.Ratings.Add(row);
             }
 
@@ -82,7 +82,6 @@ public sealed class RatingSheetService(
             row.Rationale = request.Declined is null ? request.Rationale!.Trim() : null;
             row.DeclinedReason = request.Declined?.Trim();
             row.UpdatedAt = now;
-            row.Version++;
             audit.Record(db, id, new AuditEvent(request.Declined is null ? "rating.saved" : "rating.declined",
                 $"ratings/{code}/{bidder.Code}/{c.Id}", old, InputStore.Describe(row)));
             await InputStore.SaveAsync(db, what, () => CurrentCellAsync(id, code, bidder.Code, c.Id, x.Evaluation.MinRationaleLength, ct), ct);
@@ -114,7 +113,6 @@ public sealed class RatingSheetService(
             }
 
             seat.SubmittedAt = clock.GetUtcNow();
-            seat.Version++;
             audit.Record(db, id, new AuditEvent("sheet.submitted", $"sheets/{seat.AssessorCode}", null,
                 $"{sheet.Progress.Done} of {sheet.Progress.Total} cells done ({sheet.Cells.Count(c => c.Declined is not null)} declined)"));
             await InputStore.SaveAsync(db, "Your rating sheet", () => Task.FromResult<object?>(null), ct);

@@ -59,7 +59,6 @@ public sealed class WeightsService(
                     {
                         (row.Term, row.Lower, row.Middle, row.Upper) = (w.Term, w.Lower, w.Middle, w.Upper);
                         row.UpdatedAt = now;
-                        row.Version++;
                     }
                 }
                 else
@@ -75,7 +74,7 @@ public sealed class WeightsService(
             db.WeightJudgements.RemoveRange(byKey.Values);
             var withdrawn = seat.WeightsSubmittedAt is not null;
             seat.WeightsSubmittedAt = null;
-            seat.Version++;
+            db.MarkChanged(seat); // new weights withdraw a submission and move the seat's version even when it was not submitted
             audit.Record(db, id, new AuditEvent("weights.updated", $"weights/{seat.AssessorCode}", before,
                 Describe(wanted) + (withdrawn ? " (the earlier submission is withdrawn until submitted again)" : "")));
             await InputStore.SaveAsync(db, "Your weight judgements", async () => await GetAsync(id, ct), ct);
@@ -115,7 +114,6 @@ public sealed class WeightsService(
             }
 
             seat.WeightsSubmittedAt = clock.GetUtcNow();
-            seat.Version++;
             audit.Record(db, id, new AuditEvent("weights.submitted", $"weights/{seat.AssessorCode}", null,
                 Describe(judgements) + (feedback.Warnings.Count > 0 ? $" (warnings: {string.Join(" ", feedback.Warnings)})" : "")));
             await InputStore.SaveAsync(db, "Your weight judgements", async () => await GetAsync(id, ct), ct);

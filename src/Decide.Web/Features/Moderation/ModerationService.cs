@@ -206,7 +206,7 @@ public sealed class ModerationService(
                 RecordedAt = clock.GetUtcNow(),
             };
             db.Moderation.Add(entry);
-            m.Evaluation.Version++;
+            db.MarkChanged(m.Evaluation); // a moderated value moves the evaluation's version
             audit.Record(db, id, new AuditEvent("moderation.recorded", $"moderation/{alternative}/{criterion}",
                 inForce is null ? null : $"{inForce.Term}: {inForce.Reason}",
                 $"{term}: {reason} (agreed by {string.Join(", ", agreed)}; originals {string.Join(", ", originals.Select(o => $"{o.Assessor}={o.Term ?? "declined"}"))})"));
@@ -238,8 +238,7 @@ public sealed class ModerationService(
             }
 
             seat.SubmittedAt = null;
-            seat.Version++;
-            m.Evaluation.Version++;
+            db.MarkChanged(m.Evaluation); // a reopened sheet moves the evaluation's version
             audit.Record(db, id, new AuditEvent("sheet.reopened", $"sheets/{assessorCode}",
                 $"submitted {submitted:O}", $"reopened: {reason}"));
             await EvaluationService.SaveAsync(db, m.Evaluation, ct);

@@ -86,7 +86,6 @@ public sealed class SignOffService(
             e.SignOffRequestedAt = clock.GetUtcNow();
             e.SignOffRequestedBy = user.Id;
             e.SignOffRequestNote = note;
-            e.Version++;
             audit.Record(db, id, new AuditEvent("signoff.requested", $"evaluations/{id}/sign-off", null,
                 $"{note} (evaluation file sha256 {hash})"));
             await EvaluationService.SaveAsync(db, e, ct);
@@ -153,7 +152,7 @@ public sealed class SignOffService(
             var now = clock.GetUtcNow();
             db.Approvals.Add(new Approval { EvaluationId = id, UserId = user.Id, Statement = statement, ApprovedAt = now });
             var count = await db.Approvals.CountAsync(a => a.EvaluationId == id, ct) + 1;
-            m.Evaluation.Version++;
+            db.MarkChanged(m.Evaluation); // an approval moves the evaluation's version
             audit.Record(db, id, new AuditEvent("approval.recorded", $"evaluations/{id}/approvals", null,
                 $"approval {count} of {m.Evaluation.RequiredApprovals}: {statement} (evaluation file sha256 {hash})"));
             if (count >= m.Evaluation.RequiredApprovals)
