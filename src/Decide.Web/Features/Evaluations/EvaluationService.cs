@@ -315,43 +315,20 @@ public sealed class EvaluationService(
     public Task<TransitionResult> LockPlanAsync(Guid id, TransitionRequest request, CancellationToken ct = default) =>
         Transition(id, request, "lock the plan", EvaluationStage.Setup, EvaluationStage.PlanLocked, "plan.locked", async (db, m) =>
         {
-            var file = await composer.ComposeAsync(db, m.Evaluation, ct);
-            if (file.Evaluation.Assessors.Count == 0)
+            var check = await CheckLockAsync(db, m.Evaluation, ct);
+            if (check.Blocking.Count > 0)
             {
-                throw DomainProblem.Stage("Cannot lock the plan: the panel has no assessor yet.");
+                throw DomainProblem.Stage($"The plan cannot be locked yet. {string.Join(" ", check.Blocking)}");
             }
 
-            // Only submitted weights are frozen: an assessor still working on theirs must finish or withdraw them.
-            var judges = file.Evaluation.Importance.Select(r => r.Assessor).Concat(file.Evaluation.Pairwise.Select(p => p.Assessor)).ToHashSet(StringComparer.Ordinal);
-            var unsubmitted = m.Evaluation.Panel
-                .Where(p => p.Role == PanelRole.Assessor && p.AssessorCode is { } code && judges.Contains(code) && p.WeightsSubmittedAt is null)
-                .Select(p => p.AssessorCode!).ToArray();
-            if (unsubmitted.Length > 0)
+            if (check.Errors.Count > 0)
             {
-                throw DomainProblem.Stage($"Cannot lock the plan: {string.Join(", ", unsubmitted)} {(unsubmitted.Length == 1 ? "has" : "have")} weight judgements that are not submitted yet.");
-            }
-
-            // Bids are not in yet: judge the plan and the weights alone.
-            var errors = EvaluationValidator.Validate(file.Evaluation)
-                .Where(e => InScope(e.Path, [.. PlanPaths, "$.assessors", "$.importance", "$.pairwise"]))
-                .ToArray();
-            if (errors.Length > 0)
-            {
-                throw new InvalidEvaluationException(errors);
+                throw new InvalidEvaluationException(check.Errors);
             }
 
             m.Evaluation.PlanLockedAt = clock.GetUtcNow();
             m.Evaluation.PlanHash = Sha256(m.Evaluation.PlanJson);
-            var warnings = new List<string>();
-            if (file.Evaluation.Weighting == Core.Model.WeightingMethod.Pairwise)
-            {
-                var withBid = file.Evaluation with { Alternatives = [new Core.Model.Alternative("_", "_")], Ratings = [], Values = [], Gates = [], Moderated = [] };
-                var (_, consistency) = Core.Weighting.CriterionWeights.Derive(withBid, withBid.Criteria.Where(c => c.Kind != Core.Model.CriterionKind.Gate).ToArray());
-                warnings.AddRange(consistency.Where(c => !c.Report.Acceptable).Select(c =>
-                    $"{(c.Assessor == EvaluationValidator.PanelId ? "The panel's" : $"Assessor {c.Assessor}'s")} comparisons{(c.Group is null ? "" : $" within {c.Group}")} have a consistency ratio of {c.Report.Ratio:0.000}, above {c.Report.Threshold:0.00}."));
-            }
-
-            return warnings;
+            return check.Consistency;
         }, ct);
 
     /// <summary>Plan locked → scoring: bidders' names become visible to assessors who confirm their declaration.</summary>
@@ -467,8 +444,20 @@ public sealed class EvaluationService(
     /// <summary>The checks <see cref="LockPlanAsync"/> makes, as sentences, plus what the facilitator should know before locking.</summary>
     private async Task<LockReadiness> ReadinessAsync(DecideDbContext db, StoredEvaluation e, CancellationToken ct)
     {
-        var blocking = new List<string>();
-        var warnings = new List<string>();
+        var check = await CheckLockAsync(db, e, ct);
+        return new LockReadiness([.. check.Blocking, .. check.Errors.Select(x => $"{x.Path}: {x.Reason}")], [.. check.Warnings, .. check.Consistency]);
+    }
+
+    /// <summary>What stands in the way of locking the plan, and what the facilitator should know: one check for "can I lock?" and "lock".</summary>
+    /// <param name="Blocking">Sentences: no assessor, weights not submitted.</param>
+    /// <param name="Errors">The plan's and the weights' problems by place (bids are not in yet, so they are not judged).</param>
+    /// <param name="Warnings">Assessors who gave no weights.</param>
+    /// <param name="Consistency">Pairwise matrices above their consistency threshold (only when nothing blocks).</param>
+    private sealed record LockCheck(
+        IReadOnlyList<string> Blocking, IReadOnlyList<EvaluationError> Errors, IReadOnlyList<string> Warnings, IReadOnlyList<string> Consistency);
+
+    private async Task<LockCheck> CheckLockAsync(DecideDbContext db, StoredEvaluation e, CancellationToken ct)
+    {
         EvaluationFile file;
         try
         {
@@ -476,15 +465,18 @@ public sealed class EvaluationService(
         }
         catch (InvalidEvaluationException problem)
         {
-            return new LockReadiness(problem.Errors.Select(x => $"{x.Path}: {x.Reason}").ToArray(), []);
+            return new LockCheck([], problem.Errors, [], []);
         }
 
+        var blocking = new List<string>();
+        var warnings = new List<string>();
         var assessors = e.Panel.Where(p => p.Role == PanelRole.Assessor && p.AssessorCode is not null).OrderBy(p => p.Id).ToArray();
         if (assessors.Length == 0)
         {
             blocking.Add("The panel has no assessor yet: seat at least one under Panel.");
         }
 
+        // Only submitted weights are frozen: an assessor still working on theirs must finish or withdraw them.
         var judges = file.Evaluation.Importance.Select(r => r.Assessor).Concat(file.Evaluation.Pairwise.Select(p => p.Assessor)).ToHashSet(StringComparer.Ordinal);
         foreach (var seat in assessors)
         {
@@ -501,10 +493,20 @@ public sealed class EvaluationService(
             }
         }
 
-        blocking.AddRange(EvaluationValidator.Validate(file.Evaluation)
+        // Bids are not in yet: judge the plan and the weights alone.
+        var errors = EvaluationValidator.Validate(file.Evaluation)
             .Where(x => InScope(x.Path, [.. PlanPaths, "$.assessors", "$.importance", "$.pairwise"]))
-            .Select(x => $"{x.Path}: {x.Reason}"));
-        return new LockReadiness(blocking, warnings);
+            .ToArray();
+        var consistency = new List<string>();
+        if (blocking.Count == 0 && errors.Length == 0 && file.Evaluation.Weighting == Core.Model.WeightingMethod.Pairwise)
+        {
+            // The weights need no bid: derived from the plan and the judgements alone.
+            var (_, reports) = Core.Weighting.CriterionWeights.Derive(file.Evaluation, file.Evaluation.Criteria.Where(c => c.Kind != Core.Model.CriterionKind.Gate).ToArray());
+            consistency.AddRange(reports.Where(c => !c.Report.Acceptable).Select(c =>
+                $"{(c.Assessor == EvaluationValidator.PanelId ? "The panel's" : $"Assessor {c.Assessor}'s")} comparisons{(c.Group is null ? "" : $" within {c.Group}")} have a consistency ratio of {c.Report.Ratio:0.000}, above {c.Report.Threshold:0.00}."));
+        }
+
+        return new LockCheck(blocking, errors, warnings, consistency);
     }
 
     internal static EvaluationSummary Summarise(StoredEvaluation e, IEnumerable<PanelRole> roles) =>
