@@ -36,7 +36,7 @@ public enum WeightingMethod
 /// <summary>How the panel's individual TFNs become one.</summary>
 public enum AggregationRule
 {
-    /// <summary>Weighted arithmetic mean, component-wise (Chen 2000, eq. 8).</summary>
+    /// <summary>Weighted arithmetic mean, component-wise (Chen 2000, eqs. 13–14).</summary>
     Mean,
 
     /// <summary>Weighted geometric mean, component-wise; less pulled by one extreme judgement.</summary>

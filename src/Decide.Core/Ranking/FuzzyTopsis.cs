@@ -13,8 +13,8 @@ namespace Decide.Core.Ranking;
 /// and Systems 114:1–9. Benefit: r̃ᵢⱼ = (aᵢⱼ/cⱼ*, bᵢⱼ/cⱼ*, cᵢⱼ/cⱼ*), cⱼ* = maxᵢ cᵢⱼ (r̃ = 0 when cⱼ* = 0). Cost:
 /// r̃ᵢⱼ = (aⱼ⁻/cᵢⱼ, aⱼ⁻/bᵢⱼ, aⱼ⁻/aᵢⱼ), aⱼ⁻ = minᵢ aᵢⱼ, which needs every aᵢⱼ &gt; 0 (the validator guarantees it).
 /// ṽᵢⱼ = r̃ᵢⱼ ⊗ w̃ⱼ; d⁺ᵢ = Σⱼ d(ṽᵢⱼ, ṽⱼ*), d⁻ᵢ = Σⱼ d(ṽᵢⱼ, ṽⱼ⁻), CCᵢ = d⁻ᵢ/(d⁺ᵢ + d⁻ᵢ). When d⁺ + d⁻ = 0 (every
-/// alternative identical and crisp under extreme ideal points) CC = 0.5 for all. The tests reproduce the paper's
-/// worked example to the two decimals it prints.
+/// alternative identical and crisp under extreme ideal points) CC = 0.5 for all. The tests check the paper's worked
+/// example, whose printed tables have errata (docs/methods.md §6).
 /// </remarks>
 public static class FuzzyTopsis
 {

@@ -13,7 +13,7 @@ public sealed class GroupAggregationTests
     [Fact]
     public void Mean_with_equal_weights_is_chens_average()
     {
-        // Chen (2000) eq. 8: (1/K)(x¹ ⊕ … ⊕ xᴷ) = ((0+7+3)/3, (1+9+5)/3, (3+10+7)/3).
+        // Chen (2000) eqs. 13–14: (1/K)(x¹ ⊕ … ⊕ xᴷ) = ((0+7+3)/3, (1+9+5)/3, (3+10+7)/3).
         var mean = GroupAggregation.Aggregate([Poor, Good, Fair], [1, 1, 1], AggregationRule.Mean);
         AssertTfn(new Tfn(10.0 / 3, 5, 20.0 / 3), mean);
     }

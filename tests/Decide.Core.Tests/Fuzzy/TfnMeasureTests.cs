@@ -20,7 +20,7 @@ public sealed class TfnMeasureTests
     }
 
     [Theory]
-    // Derived from the definition in Chen (2000), eq. 6 (shared METHODS §1).
+    // Derived from the definition in Chen (2000), eq. 12.
     [InlineData(7, 9, 10, 9, 10, 10, 1.2910)]
     [InlineData(0.7, 0.9, 1.0, 1, 1, 1, 0.1826)]
     [InlineData(0.7, 0.9, 1.0, 0, 0, 0, 0.8756)]
