@@ -37,13 +37,15 @@ public sealed class GroupAggregationTests
     }
 
     [Fact]
-    public void Geometric_mean_is_pulled_less_than_the_mean_by_one_low_judgement()
+    public void Geometric_mean_is_pulled_further_down_than_the_mean_by_one_low_judgement()
     {
+        // G, G, P: by hand, the mean is (14/3, 19/3, 23/3) and the geometric mean (0, ∛81, ∛300) = (0, 4.327, 6.694):
+        // lower on every vertex, and a single zero lower value takes the geometric lower value to zero.
         var values = new[] { Good, Good, Poor };
         var mean = GroupAggregation.Aggregate(values, [1, 1, 1], AggregationRule.Mean);
         var geometric = GroupAggregation.Aggregate(values, [1, 1, 1], AggregationRule.Geometric);
-        Assert.True(geometric.Upper < mean.Upper);
-        Assert.Equal(0, geometric.Lower); // a zero lower value makes the geometric lower value zero
+        AssertTfn(new Tfn(14.0 / 3, 19.0 / 3, 23.0 / 3), mean);
+        AssertTfn(new Tfn(0, Math.Cbrt(81), Math.Cbrt(300)), geometric);
     }
 
     [Theory]

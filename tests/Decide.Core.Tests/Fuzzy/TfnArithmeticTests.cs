@@ -2,7 +2,7 @@ using Decide.Core.Fuzzy;
 
 namespace Decide.Core.Tests.Fuzzy;
 
-/// <summary>Arithmetic as defined in Chen (2000), Fuzzy Sets and Systems 114:1–9, §2 (shared METHODS §1).</summary>
+/// <summary>Arithmetic as defined in Chen (2000), Fuzzy Sets and Systems 114:1–9, §2.</summary>
 public sealed class TfnArithmeticTests
 {
     private const double Tolerance = 1e-12;
