@@ -15,13 +15,13 @@ namespace Decide.Benchmarks;
 /// importance per criterion. Pairwise judgements are the hidden weight ratios wᵢ/wⱼ with log-normal noise, snapped
 /// to the nearest code of the pairwise-9 scale, so the matrices are nearly (not exactly) consistent. With more than
 /// <see cref="MaxUngrouped"/> scored criteria, the criteria are put into groups of about <see cref="GroupSize"/> so
-/// that no pairwise matrix exceeds the random-index table (15 items): 60 criteria give 6 groups, with the gate
-/// outside them.
+/// that no pairwise matrix exceeds the random-index table (10 items): 60 criteria give 6 groups, the typical 11 scored
+/// criteria 2, with the gate outside them.
 /// </remarks>
 public static class SyntheticEvaluations
 {
     /// <summary>Most scored criteria kept at the top level; above this the criteria are grouped.</summary>
-    public const int MaxUngrouped = 15;
+    public const int MaxUngrouped = Decide.Core.Consistency.RandomIndex.MaxOrder;
 
     /// <summary>Target number of criteria per group when grouping.</summary>
     public const int GroupSize = 10;

@@ -7,7 +7,7 @@ namespace Decide.Core.Aggregation;
 /// Combines several assessors' TFNs for one cell (or one weight) into the panel's TFN.
 /// </summary>
 /// <remarks>
-/// Mean: x̃ = Σₖ ωₖ x̃ᵏ with ωₖ = assessor weights renormalised over those who rated the cell (Chen 2000, eq. 8,
+/// Mean: x̃ = Σₖ ωₖ x̃ᵏ with ωₖ = assessor weights renormalised over those who rated the cell (Chen 2000, eqs. 13–14,
 /// where all ωₖ = 1/K). Geometric: each component is Πₖ (xᵏ)^ωₖ. A declined or unassigned cell is simply absent
 /// from the values passed in: the weights of those who did rate it are renormalised. Nothing is imputed.
 /// </remarks>

@@ -401,8 +401,9 @@ public static class EvaluationValidator
             {
                 if (items.Count > RandomIndex.MaxOrder)
                 {
+                    var matrix = name == "" ? "the top level" : $"group \"{(e.Groups.First(g => g.Id == name) is { Name.Length: > 0 } group ? group.Name : name)}\"";
                     Add(name == "" ? "$.criteria" : JsonPath.Key("$.groups", name),
-                        $"{items.Count} items are compared in one matrix; pairwise comparison is limited to {RandomIndex.MaxOrder} (group the criteria)");
+                        $"the pairwise matrix of {matrix} compares {items.Count} items; the consistency check has a published random index only up to {RandomIndex.MaxOrder}, so split these criteria into groups of at most {RandomIndex.MaxOrder}");
                 }
             }
 

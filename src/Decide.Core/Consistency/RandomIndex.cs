@@ -5,22 +5,22 @@ namespace Decide.Core.Consistency;
 /// </summary>
 /// <remarks>
 /// Values for n = 3…10 from Saaty (1980), The Analytic Hierarchy Process, McGraw-Hill, as widely reproduced
-/// (recalled, not re-read; docs/methods.md §5); n = 11…15 from Saaty's extended table (recalled). RI(1) = RI(2) = 0:
-/// matrices of order 1 and 2 are consistent by definition.
+/// [recalled, not re-read; docs/methods.md §5]. RI(1) = RI(2) = 0: matrices of order 1 and 2 are consistent by
+/// definition. There is no value above n = 10: the figures that circulate for larger orders have no source Decide
+/// can name, so the validator refuses a matrix of more than 10 items and asks for the criteria to be grouped.
 /// </remarks>
 public static class RandomIndex
 {
     /// <summary>Name recorded with every consistency ratio, so the record says which table was used.</summary>
-    public const string TableName = "Saaty (1980), n = 3–15";
+    public const string TableName = "Saaty (1980), n = 3–10";
 
-    /// <summary>Largest matrix order the table covers.</summary>
-    public const int MaxOrder = 15;
+    /// <summary>Largest matrix order the table covers, and so the most items one pairwise matrix may compare.</summary>
+    public const int MaxOrder = 10;
 
-    private static readonly double[] Values =
-        [0, 0, 0, 0.58, 0.90, 1.12, 1.24, 1.32, 1.41, 1.45, 1.49, 1.51, 1.48, 1.56, 1.57, 1.59];
+    private static readonly double[] Values = [0, 0, 0, 0.58, 0.90, 1.12, 1.24, 1.32, 1.41, 1.45, 1.49];
 
-    /// <summary>RI(n) for 1 ≤ n ≤ 15.</summary>
-    /// <exception cref="ArgumentOutOfRangeException">n outside 1…15.</exception>
+    /// <summary>RI(n) for 1 ≤ n ≤ 10 (Saaty 1980 [recalled]).</summary>
+    /// <exception cref="ArgumentOutOfRangeException">n outside 1…10.</exception>
     public static double For(int n) => n is >= 1 and <= MaxOrder
         ? Values[n]
         : throw new ArgumentOutOfRangeException(nameof(n), n, $"The random index table covers matrices of order 1 to {MaxOrder}.");

@@ -76,7 +76,8 @@ public readonly record struct Tfn
     public static Tfn operator *(Tfn a, double k) => k * a;
 
     /// <summary>
-    /// Approximate product (l₁l₂, m₁m₂, u₁u₂) of two non-negative TFNs (Chen 2000, eq. 4).
+    /// Approximate product (l₁l₂, m₁m₂, u₁u₂) of two non-negative TFNs: the vertex-wise approximation of the
+    /// α-cut product (Chen 2000, eq. 7).
     /// </summary>
     /// <exception cref="ArgumentOutOfRangeException">Either operand has a negative lower value.</exception>
     public static Tfn operator *(Tfn a, Tfn b)
@@ -112,7 +113,7 @@ public readonly record struct Tfn
     public double GradedMean => (Lower + (4 * Middle) + Upper) / 6;
 
     /// <summary>
-    /// Vertex distance d(ã, b̃) = √(((l₁−l₂)² + (m₁−m₂)² + (u₁−u₂)²) / 3) (Chen 2000, eq. 6). For crisp numbers it
+    /// Vertex distance d(ã, b̃) = √(((l₁−l₂)² + (m₁−m₂)² + (u₁−u₂)²) / 3) (Chen 2000, eq. 12). For crisp numbers it
     /// is |x − y|.
     /// </summary>
     public static double Distance(Tfn a, Tfn b)

@@ -18,7 +18,8 @@ namespace Decide.Core.Ranking;
 /// away from the ideal as it grows, so a dearer copy of a bid could overtake the original. Dividing every weight by
 /// one number leaves the crisp shares unchanged. Distances (eqs. 17–18): d⁺ᵢ = Σⱼ d(ṽᵢⱼ, ṽⱼ*),
 /// d⁻ᵢ = Σⱼ d(ṽᵢⱼ, ṽⱼ⁻); closeness (eq. 19): CCᵢ = d⁻ᵢ/(d⁺ᵢ + d⁻ᵢ). When d⁺ + d⁻ = 0 (every alternative identical
-/// and crisp under extreme ideal points) CC = 0.5 for all.
+/// and crisp under extreme ideal points) CC = 0.5 for all. The tests check the paper's worked example, whose
+/// printed tables have errata (docs/methods.md §6).
 /// </remarks>
 public static class FuzzyTopsis
 {

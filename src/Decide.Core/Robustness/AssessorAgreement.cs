@@ -14,7 +14,7 @@ namespace Decide.Core.Robustness;
 /// <param name="CellsRated">How many linguistic cells the assessor rated with a term.</param>
 /// <param name="MeanDistance">
 /// The mean vertex distance d(own TFN, panel aggregate) over the cells they rated, in the rating scale's units
-/// (Chen 2000, eq. 6): 0 when they agree with the aggregate everywhere.
+/// (Chen 2000, eq. 12): 0 when they agree with the aggregate everywhere.
 /// </param>
 /// <param name="TauWithPanel">
 /// Kendall's tau-b between this assessor's closeness and the panel's: 1 for the same order, −1 for the reverse;

@@ -13,7 +13,7 @@ public sealed class GroupAggregationTests
     [Fact]
     public void Mean_with_equal_weights_is_chens_average()
     {
-        // Chen (2000) eq. 8: (1/K)(x¹ ⊕ … ⊕ xᴷ) = ((0+7+3)/3, (1+9+5)/3, (3+10+7)/3).
+        // Chen (2000) eqs. 13–14: (1/K)(x¹ ⊕ … ⊕ xᴷ) = ((0+7+3)/3, (1+9+5)/3, (3+10+7)/3).
         var mean = GroupAggregation.Aggregate([Poor, Good, Fair], [1, 1, 1], AggregationRule.Mean);
         AssertTfn(new Tfn(10.0 / 3, 5, 20.0 / 3), mean);
     }
@@ -47,7 +47,8 @@ public sealed class GroupAggregationTests
         var geometric = GroupAggregation.Aggregate(values, [1, 1, 1], AggregationRule.Geometric);
         Assert.Equal(14.0 / 3, mean.Lower, 12);
         Assert.Equal(0, geometric.Lower);
-        Assert.Equal(Math.Cbrt(81), geometric.Middle, 12); // (9 · 9 · 1)^⅓
+        AssertTfn(new Tfn(14.0 / 3, 19.0 / 3, 23.0 / 3), mean);
+        AssertTfn(new Tfn(0, Math.Cbrt(81), Math.Cbrt(300)), geometric); // by hand: (0·7·7)^⅓, (9·9·1)^⅓, (10·10·3)^⅓
     }
 
     [Theory]

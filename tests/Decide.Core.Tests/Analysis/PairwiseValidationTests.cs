@@ -69,4 +69,69 @@ public sealed class PairwiseValidationTests
         var errors = Refused(Sample with { Pairwise = [] });
         HasError(errors, "$.pairwise", "nobody has compared the criteria");
     }
+
+    [Fact]
+    public void Eleven_criteria_in_the_top_level_matrix_are_refused()
+    {
+        var errors = Refused(Compared(11, grouped: false));
+        HasError(errors, "$.criteria", "the pairwise matrix of the top level compares 11 items",
+            "published random index only up to 10", "split these criteria into groups of at most 10");
+    }
+
+    [Fact]
+    public void Eleven_criteria_in_one_group_are_refused_naming_the_group()
+    {
+        var errors = Refused(Compared(11, grouped: true));
+        HasError(errors, "$.groups.G", "the pairwise matrix of group \"Service\" compares 11 items", "split these criteria");
+        Assert.DoesNotContain(errors, e => e.Path == "$.criteria");
+    }
+
+    [Theory]
+    [InlineData(false)]
+    [InlineData(true)]
+    public void Ten_criteria_in_one_matrix_are_accepted_and_use_RI_1_49(bool grouped)
+    {
+        // RI(10) = 1.49, Saaty (1980) [recalled]: the largest order with a published random index.
+        var result = Decide.Core.Analysis.DecisionEngine.Analyze(Compared(10, grouped));
+        var ten = result.Consistency.Where(c => c.Items.Count == 10).ToArray();
+        Assert.NotEmpty(ten); // the assessor's matrix and the panel's
+        Assert.All(ten, c => Assert.Equal(1.49, c.Report.RandomIndex));
+    }
+
+    /// <summary>
+    /// A valid evaluation with <paramref name="n"/> linguistic criteria compared by one assessor (every judgement
+    /// "1"): alone at the top level, or all in group G ("Service"), which is then compared with PRICE.
+    /// </summary>
+    private static Evaluation Compared(int n, bool grouped)
+    {
+        var ids = Enumerable.Range(1, n).Select(i => $"K{i}").ToArray();
+        string[] alternatives = ["S1", "S2", "S3"];
+        var top = grouped ? new[] { "G", "PRICE" } : ids;
+        var judgements = new List<PairwiseJudgement>();
+        foreach (var matrix in grouped ? new[] { ids, top } : [top])
+        {
+            for (var i = 0; i < matrix.Length; i++)
+            {
+                for (var j = i + 1; j < matrix.Length; j++)
+                {
+                    judgements.Add(Judgement("D1", matrix[i], matrix[j], "1"));
+                }
+            }
+        }
+
+        return Sample with
+        {
+            Groups = grouped ? [new CriterionGroup("G", "Service")] : [],
+            Criteria =
+            [
+                .. ids.Select(id => new Criterion(id, id, Group: grouped ? "G" : null)),
+                .. grouped ? [new Criterion("PRICE", "Annual price", CriterionKind.Numeric, Direction.Cost, Unit: "EUR")] : Array.Empty<Criterion>(),
+            ],
+            Values = grouped ? Sample.Values : [],
+            Assessors = [new Assessor("D1", "First assessor")],
+            Ratings = [.. from id in ids from a in alternatives select new Rating("D1", a, id, "G")],
+            Gates = [],
+            Pairwise = judgements,
+        };
+    }
 }

@@ -6,7 +6,7 @@ namespace Decide.Core.Tests.Consistency;
 /// <summary>
 /// An independent published figure for the eigenvalue code: the random index of order 3 by Alonso &amp; Lamata
 /// (2006), "Consistency in the analytic hierarchy process: a new approach", Int. J. Uncertainty, Fuzziness and
-/// Knowledge-Based Systems 14(4):445–459, RI(3) = 0.5245 (shared METHODS §5). Averaging the consistency index
+/// Knowledge-Based Systems 14(4):445–459, RI(3) = 0.5245. Averaging the consistency index
 /// exactly over all 17³ reciprocal 3 × 3 matrices on Saaty's 17-value scale gives 0.52446 [derived].
 /// </summary>
 public sealed class AlonsoLamataRandomIndexTests

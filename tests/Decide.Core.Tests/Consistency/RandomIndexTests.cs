@@ -6,7 +6,7 @@ namespace Decide.Core.Tests.Consistency;
 public sealed class RandomIndexTests
 {
     [Theory]
-    // Saaty (1980), The Analytic Hierarchy Process, McGraw-Hill [recalled; widely reproduced, shared METHODS §5];
+    // Saaty (1980), The Analytic Hierarchy Process, McGraw-Hill [recalled; widely reproduced];
     // the table prints two decimals and is compared exactly.
     [InlineData(3, 0.58)]
     [InlineData(4, 0.90)]
@@ -30,14 +30,24 @@ public sealed class RandomIndexTests
 
     [Theory]
     [InlineData(0)]
-    [InlineData(16)]
+    [InlineData(11)]
+    [InlineData(15)]
     public void Orders_outside_the_table_are_refused(int n)
     {
+        // No sourced value above n = 10, so none is offered (the validator refuses larger matrices).
+        Assert.Equal(10, RandomIndex.MaxOrder);
         Assert.Throws<ArgumentOutOfRangeException>(() => RandomIndex.For(n));
     }
 
+    [Fact]
+    public void A_matrix_of_eleven_items_gets_no_consistency_ratio()
+    {
+        Assert.Throws<ArgumentOutOfRangeException>(
+            () => PairwiseConsistency.Analyze(ReciprocalMatrices.RandomSaaty(11, new Random(11)), ReciprocalMatrices.Items(11)));
+    }
+
     [Theory]
-    // Saaty (1994), Fundamentals of Decision Making and Priority Theory [recalled; shared METHODS §5].
+    // Saaty (1994), Fundamentals of Decision Making and Priority Theory [recalled].
     [InlineData(3, 0.05)]
     [InlineData(4, 0.08)]
     [InlineData(5, 0.10)]
@@ -48,7 +58,7 @@ public sealed class RandomIndexTests
     }
 
     [Theory]
-    // Aguarón & Moreno-Jiménez (2003), EJOR 147:137–145 [recalled; shared METHODS §5].
+    // Aguarón & Moreno-Jiménez (2003), EJOR 147:137–145 [recalled].
     [InlineData(3, 0.31)]
     [InlineData(4, 0.35)]
     [InlineData(5, 0.37)]
@@ -63,7 +73,7 @@ public sealed class RandomIndexTests
     {
         var report = PairwiseConsistency.Analyze(ReciprocalMatrices.RandomSaaty(5, new Random(5)), ReciprocalMatrices.Items(5));
         Assert.Equal(RandomIndex.TableName, report.RandomIndexTable);
-        Assert.Contains("Saaty (1980)", report.RandomIndexTable, StringComparison.Ordinal);
+        Assert.Equal("Saaty (1980), n = 3–10", report.RandomIndexTable);
         Assert.Equal(1.12, report.RandomIndex);
         Assert.Equal(0.10, report.Threshold);
         Assert.Equal(0.37, report.GciThreshold);

@@ -4,7 +4,7 @@ namespace Decide.Core.Tests.Consistency;
 
 /// <summary>
 /// For a 3 × 3 reciprocal matrix everything depends on c = a₁₂·a₂₃/a₁₃: λmax = 1 + c^⅓ + c^−⅓ and
-/// GCI = (ln c)²/3 (both derived from the definitions in shared METHODS §5).
+/// GCI = (ln c)²/3 (both derived from the definitions).
 /// </summary>
 public sealed class ThreeByThreeClosedFormTests
 {

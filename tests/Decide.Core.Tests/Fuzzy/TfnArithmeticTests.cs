@@ -2,7 +2,7 @@ using Decide.Core.Fuzzy;
 
 namespace Decide.Core.Tests.Fuzzy;
 
-/// <summary>Arithmetic as defined in Chen (2000), Fuzzy Sets and Systems 114:1–9, §2 (shared METHODS §1).</summary>
+/// <summary>Arithmetic as defined in Chen (2000), Fuzzy Sets and Systems 114:1–9, §2.</summary>
 public sealed class TfnArithmeticTests
 {
     private const double Tolerance = 1e-12;
@@ -33,7 +33,7 @@ public sealed class TfnArithmeticTests
     [Fact]
     public void Product_of_two_non_negative_tfns_multiplies_each_vertex()
     {
-        // (5, 7, 9) ⊗ (0.7, 0.9, 1) = (3.5, 6.3, 9), Chen (2000) eq. 4 applied by hand.
+        // (5, 7, 9) ⊗ (0.7, 0.9, 1) = (3.5, 6.3, 9), the vertex-wise product (Chen 2000, eq. 7) by hand.
         AssertTfn(new Tfn(3.5, 6.3, 9), new Tfn(5, 7, 9) * new Tfn(0.7, 0.9, 1));
     }
 

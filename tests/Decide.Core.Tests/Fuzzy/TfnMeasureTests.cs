@@ -8,19 +8,19 @@ public sealed class TfnMeasureTests
     [Fact]
     public void Centroid_of_good_is_the_mean_of_its_vertices()
     {
-        // Derived from the definition in Chen (2000) (shared METHODS §1): (7 + 9 + 10)/3 = 8.6667.
+        // Derived from the definition in Chen (2000): (7 + 9 + 10)/3 = 8.6667.
         Assert.Equal(8.6667, new Tfn(7, 9, 10).Centroid, 4);
     }
 
     [Fact]
     public void Graded_mean_of_good_weights_the_middle_four_times()
     {
-        // Derived from the definition (Chen & Hsieh 1999; shared METHODS §1): (7 + 4·9 + 10)/6 = 8.8333.
+        // Derived from the definition (Chen & Hsieh 1999): (7 + 4·9 + 10)/6 = 8.8333.
         Assert.Equal(8.8333, new Tfn(7, 9, 10).GradedMean, 4);
     }
 
     [Theory]
-    // Derived from the definition in Chen (2000), eq. 6 (shared METHODS §1).
+    // Derived from the definition in Chen (2000), eq. 12.
     [InlineData(7, 9, 10, 9, 10, 10, 1.2910)]
     [InlineData(0.7, 0.9, 1.0, 1, 1, 1, 0.1826)]
     [InlineData(0.7, 0.9, 1.0, 0, 0, 0, 0.8756)]

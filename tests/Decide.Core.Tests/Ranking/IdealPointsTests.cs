@@ -4,7 +4,7 @@ using Decide.Core.Ranking;
 
 namespace Decide.Core.Tests.Ranking;
 
-/// <summary>Distances and closeness under both choices of ideal points (shared METHODS §3, steps 4–5).</summary>
+/// <summary>Distances and closeness under both choices of ideal points.</summary>
 public sealed class IdealPointsTests
 {
     // One benefit criterion, weight (1, 1, 1): after normalisation v₁ = (0.2, 0.4, 0.6), v₂ = (0.4, 0.8, 1.0).

@@ -4,7 +4,7 @@ using Decide.Core.Ranking;
 namespace Decide.Core.Tests.Ranking;
 
 /// <summary>
-/// Linear normalisation and weighting of Chen (2000), Fuzzy Sets and Systems 114:1–9 (shared METHODS §3), on small
+/// Linear normalisation and weighting of Chen (2000), Fuzzy Sets and Systems 114:1–9, on small
 /// cases computed by hand from the paper's definitions.
 /// </summary>
 public sealed class NormalisationTests

@@ -25,6 +25,22 @@ public sealed class KendallTauBTests
         Assert.Equal(0.4, RankStatistics.KendallTauB([1, 2, 2, 3], [2, 3, 1, 3])!.Value, 1e-15);
     }
 
+    [Theory]
+    // By hand: x = (1, 1, 2, 3) has one tied pair; y ties the same pair. C = 5, D = 0, n₀ = 6, n₁ = n₂ = 1, so
+    // tau-b = ±5/√(5·5) = ±1 exactly: the bound is reached through the tie adjustment, not by clamping a value
+    // that overshoots.
+    [InlineData(new double[] { 10, 10, 20, 30 }, 1)]
+    [InlineData(new double[] { 30, 30, 20, 10 }, -1)]
+    public void Ties_shared_by_both_series_still_give_exactly_plus_or_minus_1(double[] y, double expected) =>
+        Assert.Equal(expected, RankStatistics.KendallTauB([1, 1, 2, 3], y)!.Value, 1e-15);
+
+    [Fact]
+    public void Ties_in_one_series_only_keep_tau_b_below_1()
+    {
+        // By hand: x = (1, 1, 2), y = (1, 2, 3): C = 2, D = 0, n₀ = 3, n₁ = 1, n₂ = 0, tau-b = 2/√(2·3) = √(2/3).
+        Assert.Equal(Math.Sqrt(2.0 / 3), RankStatistics.KendallTauB([1, 1, 2], [1, 2, 3])!.Value, 1e-15);
+    }
+
     [Fact]
     public void Tau_b_is_undefined_for_fewer_than_two_pairs_or_a_series_that_ties_everything()
     {

@@ -1,31 +1,84 @@
 using Decide.Core.Analysis;
-using Decide.Core.Fuzzy;
-using Decide.Core.Ranking;
 using Decide.Core.Robustness;
 
 namespace Decide.Core.Tests.Robustness;
 
+/// <summary>
+/// Weight sweeps, checked against closed forms where the answer is fixed independently of the code.
+/// </summary>
+/// <remarks>
+/// The closed form: with crisp ratings, crisp weights no larger than 1 and the unit ideal points (1,1,1) and (0,0,0),
+/// every weighted value v lies in [0, 1], so the vertex distance (Chen 2000, eq. 12) of a crisp v from 1 is 1 − v
+/// and from 0 is v. Then d⁺ + d⁻ = m and CCᵢ = Σⱼ wⱼrᵢⱼ / m (eqs. 17–19): closeness is the weighted sum of the
+/// normalised values divided by the number of criteria. With two criteria whose weights sum to 1, sweeping C1's
+/// share to t gives w = (t, 1 − t), so CCᵢ(t) = (t·rᵢ₁ + (1 − t)·rᵢ₂)/2 and two alternatives swap where their lines
+/// cross: t* = b/(a + b), with a the first's lead on C1 and b the second's lead on C2 (normalised). Every swept
+/// weight stays within [0, 1], so rescaling a weight vector whose largest upper value exceeds 1 would not touch it;
+/// and as CC is linear in the weights here, such a rescaling could not move t* anyway.
+/// </remarks>
 public sealed class WeightSweepTests
 {
-    /// <summary>Closeness with criterion k's share set to t, computed independently of the sweep code.</summary>
-    private static double[] ClosenessAt(PreparedEvaluation p, int k, double t)
+    // Crisp scores 0–10: A1 = (9, 3), A2 = (4, 8), A3 = (7, 6); crisp importance 0.4 and 0.6 (sum 1).
+    // Normalised by the column maxima 9 and 8 (eq. 15): A1 = (1, 3/8), A2 = (4/9, 1), A3 = (7/9, 3/4).
+    private static readonly double[][] Normalised = [[1, 3.0 / 8], [4.0 / 9, 1], [7.0 / 9, 3.0 / 4]];
+
+    private static PreparedEvaluation CrispTwoCriteria() => DecisionEngine.Prepare(RobustnessFixtures.Uniform(
+        [["9", "3"], ["4", "8"], ["7", "6"]], ["4", "6"],
+        rating: RobustnessFixtures.CrispRating, importanceScale: RobustnessFixtures.CrispImportance));
+
+    private static double ClosedFormCloseness(int alternative, double t) =>
+        ((t * Normalised[alternative][0]) + ((1 - t) * Normalised[alternative][1])) / 2;
+
+    [Fact]
+    public void Crisp_two_criterion_reversals_are_at_the_closed_form_shares()
     {
-        var current = p.Weights[k].Crisp;
-        var weights = p.FuzzyWeights.Select((w, j) => (j == k ? t / current : (1 - t) / (1 - current)) * w).ToArray();
-        int n = p.Alternatives.Count, m = p.Criteria.Count;
-        var closeness = new double[n];
-        FuzzyTopsis.Evaluate(p.Matrix, m, p.IsCost, weights, p.Source.Options.Ideal, new Tfn[n * m], new double[n], new double[n], closeness);
-        return closeness;
+        var sweep = WeightSweeps.Sweep(CrispTwoCriteria(), 0);
+
+        // By hand: A2 and A3 cross at (1/4)/(1/3 + 1/4) = 3/7; A1 and A2 at (5/8)/(5/9 + 5/8) = 9/17; A1 and A3 at
+        // (3/8)/(2/9 + 3/8) = 27/43. Below each, the alternative stronger on C2 leads.
+        Assert.Equal(0.4, sweep.Current, 12);
+        Assert.Collection(sweep.Reversals,
+            r => AssertReversal(r, 3.0 / 7, "A2", "A3"),
+            r => AssertReversal(r, 9.0 / 17, "A2", "A1"),
+            r => AssertReversal(r, 27.0 / 43, "A3", "A1"));
+    }
+
+    [Fact]
+    public void Sweeping_the_other_criterion_mirrors_the_reversal_shares()
+    {
+        // C2's share s is 1 − t, so the same crossings appear at 1 − t* in reverse order, leaders swapped.
+        var sweep = WeightSweeps.Sweep(CrispTwoCriteria(), 1);
+        Assert.Equal(0.6, sweep.Current, 12);
+        Assert.Collection(sweep.Reversals,
+            r => AssertReversal(r, 1 - (27.0 / 43), "A1", "A3"),
+            r => AssertReversal(r, 1 - (9.0 / 17), "A1", "A2"),
+            r => AssertReversal(r, 1 - (3.0 / 7), "A3", "A2"));
+    }
+
+    [Fact]
+    public void Crisp_two_criterion_samples_are_the_weighted_sum_over_two()
+    {
+        var sweep = WeightSweeps.Sweep(CrispTwoCriteria(), 0);
+        Assert.Equal(Enumerable.Range(0, 21).Select(s => s / 20.0), sweep.Samples);
+        Assert.Equal(["A1", "A2", "A3"], sweep.Series.Select(s => s.Alternative));
+        for (var i = 0; i < 3; i++)
+        {
+            for (var s = 0; s < sweep.Samples.Count; s++)
+            {
+                Assert.Equal(ClosedFormCloseness(i, sweep.Samples[s]), sweep.Series[i].Closeness[s], 12);
+            }
+        }
     }
 
     [Fact]
     public void The_current_share_reproduces_the_base_closeness()
     {
+        // At t = ŵₖ every weight is multiplied by 1: the sweep must give the analysis' own closeness.
         var prepared = DecisionEngine.Prepare(RobustnessFixtures.TradeOff());
         var baseResult = prepared.Analyze();
         for (var k = 0; k < prepared.Criteria.Count; k++)
         {
-            var cc = ClosenessAt(prepared, k, prepared.Weights[k].Crisp);
+            var cc = new WeightSweeps.Sweeper(prepared, k).Closeness(prepared.Weights[k].Crisp).ToArray();
             for (var i = 0; i < cc.Length; i++)
             {
                 var expected = baseResult.Ranking.Single(r => r.Alternative == prepared.Alternatives[i].Id).Closeness;
@@ -35,7 +88,18 @@ public sealed class WeightSweepTests
     }
 
     [Fact]
-    public void A_trade_off_has_reversals_and_each_is_confirmed_on_both_sides()
+    public void The_crisp_base_closeness_is_the_weighted_sum_over_two()
+    {
+        // The closed form at the plan's own weights (0.4, 0.6), through the whole analysis.
+        var result = CrispTwoCriteria().Analyze();
+        for (var i = 0; i < 3; i++)
+        {
+            Assert.Equal(ClosedFormCloseness(i, 0.4), result.Ranking.Single(r => r.Alternative == $"A{i + 1}").Closeness, 12);
+        }
+    }
+
+    [Fact]
+    public void A_fuzzy_trade_off_has_reversals_and_each_is_a_crossing_on_both_sides()
     {
         var prepared = DecisionEngine.Prepare(RobustnessFixtures.TradeOff());
         var sweeps = WeightSweeps.Run(prepared);
@@ -44,8 +108,9 @@ public sealed class WeightSweepTests
         foreach (var (k, r) in reversals)
         {
             Assert.True(r.Confirmed);
-            var below = ClosenessAt(prepared, k, r.Weight - 1e-5);
-            var above = ClosenessAt(prepared, k, r.Weight + 1e-5);
+            var sweeper = new WeightSweeps.Sweeper(prepared, k);
+            var below = sweeper.Closeness(r.Weight - 1e-5).ToArray();
+            var above = sweeper.Closeness(r.Weight + 1e-5).ToArray();
             int a = Index(prepared, r.Below), b = Index(prepared, r.Above);
             Assert.True(below[a] > below[b], $"{r.Below} should lead {r.Above} just below {r.Weight}");
             Assert.True(above[b] > above[a], $"{r.Above} should lead {r.Below} just above {r.Weight}");
@@ -53,27 +118,14 @@ public sealed class WeightSweepTests
     }
 
     [Fact]
-    public void Sweeping_C1_up_makes_the_C1_specialist_win_and_down_the_C2_specialist()
+    public void At_the_ends_of_a_sweep_only_the_swept_criterion_or_only_the_others_count()
     {
-        var prepared = DecisionEngine.Prepare(RobustnessFixtures.TradeOff());
-        var atOne = ClosenessAt(prepared, 0, 1);
-        var atZero = ClosenessAt(prepared, 0, 0);
-        Assert.Equal(0, Array.IndexOf(atOne, atOne.Max()));  // A1 is very good on C1
-        Assert.Equal(1, Array.IndexOf(atZero, atZero.Max())); // A2 is very good on C2
-        var sweep = WeightSweeps.Sweep(prepared, 0);
+        // TradeOff: A1 is very good on C1 and best there; A2 is very good on C2 and best on C2 and C3. At t = 1
+        // only C1 carries weight, at t = 0 only C2 and C3 do, so the specialists must win there.
+        var sweep = WeightSweeps.Sweep(DecisionEngine.Prepare(RobustnessFixtures.TradeOff()), 0);
+        Assert.Equal("A1", Leader(sweep, sweep.Samples.Count - 1));
+        Assert.Equal("A2", Leader(sweep, 0));
         Assert.Contains(sweep.Reversals, r => (r.Below, r.Above) == ("A2", "A1"));
-    }
-
-    [Fact]
-    public void Samples_run_from_zero_to_one_and_every_alternative_has_a_series()
-    {
-        var prepared = DecisionEngine.Prepare(RobustnessFixtures.TradeOff());
-        var sweep = WeightSweeps.Sweep(prepared, 1);
-        Assert.Equal(0, sweep.Samples[0]);
-        Assert.Equal(1, sweep.Samples[^1]);
-        Assert.Equal(prepared.Alternatives.Count, sweep.Series.Count);
-        Assert.All(sweep.Series, s => Assert.Equal(sweep.Samples.Count, s.Closeness.Count));
-        Assert.All(sweep.Series, s => Assert.All(s.Closeness, c => Assert.InRange(c, 0, 1)));
     }
 
     [Fact]
@@ -82,6 +134,7 @@ public sealed class WeightSweepTests
         var prepared = DecisionEngine.Prepare(RobustnessFixtures.Uniform([["G"], ["F"]], ["H"]));
         var sweep = WeightSweeps.Sweep(prepared, 0);
         Assert.Empty(sweep.Reversals);
+        Assert.Empty(sweep.Series);
         Assert.Contains("only scored criterion", sweep.Note);
     }
 
@@ -96,11 +149,20 @@ public sealed class WeightSweepTests
             Assert.DoesNotContain(sweep.Reversals, r => r.Below == "A1" || r.Above == "A1");
             for (var s = 0; s < sweep.Samples.Count; s++)
             {
-                var a1 = sweep.Series[0].Closeness[s];
-                Assert.All(sweep.Series.Skip(1), other => Assert.True(a1 >= other.Closeness[s]));
+                Assert.Equal("A1", Leader(sweep, s));
             }
         }
     }
+
+    private static void AssertReversal(SweepReversal r, double share, string below, string above)
+    {
+        Assert.Equal(share, r.Weight, 1e-9); // bisection narrows to 1e-10
+        Assert.Equal((below, above), (r.Below, r.Above));
+        Assert.True(r.Confirmed);
+    }
+
+    private static string Leader(WeightSweepResult sweep, int sample) =>
+        sweep.Series.MaxBy(s => s.Closeness[sample])!.Alternative;
 
     private static int Index(PreparedEvaluation p, string id) =>
         p.Alternatives.Select((a, i) => (a, i)).Single(x => x.a.Id == id).i;

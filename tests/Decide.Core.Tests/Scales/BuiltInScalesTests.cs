@@ -6,7 +6,7 @@ namespace Decide.Core.Tests.Scales;
 public sealed class BuiltInScalesTests
 {
     [Theory]
-    // Chen (2000), Fuzzy Sets and Systems 114:1–9, Table 2, rating scale [recalled; shared METHODS §2]; exact values.
+    // Chen (2000), Fuzzy Sets and Systems 114:1–9, Table 2, rating scale [recalled]; exact values.
     [InlineData(0, "VP", "Very poor", 0, 0, 1)]
     [InlineData(1, "P", "Poor", 0, 1, 3)]
     [InlineData(2, "MP", "Medium poor", 1, 3, 5)]
@@ -20,7 +20,7 @@ public sealed class BuiltInScalesTests
     }
 
     [Theory]
-    // Chen (2000), Fuzzy Sets and Systems 114:1–9, Table 1, importance scale [recalled; shared METHODS §2]; exact values.
+    // Chen (2000), Fuzzy Sets and Systems 114:1–9, Table 1, importance scale [recalled]; exact values.
     [InlineData(0, "VL", "Very low", 0, 0, 0.1)]
     [InlineData(1, "L", "Low", 0, 0.1, 0.3)]
     [InlineData(2, "ML", "Medium low", 0.1, 0.3, 0.5)]
@@ -75,7 +75,7 @@ public sealed class BuiltInScalesTests
             scale.Terms.Select(t => t.Code));
         Assert.Equal(Tfn.One, scale[8].Value);
         Assert.Equal(Tfn.Crisp(9), scale[16].Value);
-        Assert.Equal(new Tfn(2, 3, 4), scale[10].Value); // 3̃ = (2, 3, 4) (common practice; shared METHODS §2)
+        Assert.Equal(new Tfn(2, 3, 4), scale[10].Value); // 3̃ = (2, 3, 4) (common practice)
     }
 
     [Theory]

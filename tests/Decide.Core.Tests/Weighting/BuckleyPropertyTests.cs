@@ -10,7 +10,7 @@ public sealed class BuckleyPropertyTests
     [Property]
     public void A_consistent_crisp_matrix_returns_its_weights(PositiveWeights weights)
     {
-        // aᵢⱼ = wᵢ/wⱼ; Buckley (1985) with crisp judgements returns w exactly (shared METHODS §4).
+        // aᵢⱼ = wᵢ/wⱼ; Buckley (1985) with crisp judgements returns w exactly.
         var n = weights.Values.Length;
         var w = BuckleyWeights.Compute(ReciprocalMatrices.Crisp(ReciprocalMatrices.Consistent(weights.Values), n));
         var expected = weights.Normalised;

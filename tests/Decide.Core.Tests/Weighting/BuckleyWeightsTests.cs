@@ -4,7 +4,7 @@ using Decide.Core.Weighting;
 
 namespace Decide.Core.Tests.Weighting;
 
-/// <summary>Buckley (1985), "Fuzzy hierarchical analysis", Fuzzy Sets and Systems 17:233–247 (shared METHODS §4).</summary>
+/// <summary>Buckley (1985), "Fuzzy hierarchical analysis", Fuzzy Sets and Systems 17:233–247.</summary>
 public sealed class BuckleyWeightsTests
 {
     [Fact]
