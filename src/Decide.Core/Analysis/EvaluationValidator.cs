@@ -119,7 +119,7 @@ public static class EvaluationValidator
                 {
                     var terms = string.Join(", ", zero.Select(t => $"{t.Code} ({t.Label}) {t.Value}"));
                     Add("$.options.aggregation",
-                        $"the geometric mean multiplies the assessors' values, so on the {role} one rating of a term whose lowest value is 0 would set the panel's value to 0 whatever the others said; {terms} {(zero.Length == 1 ? "has" : "have")} a value of 0. Use the weighted mean, or a {role} whose terms are all above 0");
+                        $"the geometric mean multiplies the assessors' values, so on the {role} one rating of a term whose lowest value is 0 would set the panel's value to 0 whatever the others said; {terms} {(zero.Length == 1 ? "has" : "have")} a value of 0. Use the weighted mean, or {(role.StartsWith('i') ? "an" : "a")} {role} whose terms are all above 0");
                 }
             }
         }

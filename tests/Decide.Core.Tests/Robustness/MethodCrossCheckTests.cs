@@ -88,6 +88,18 @@ public sealed class MethodCrossCheckTests
     }
 
     [Fact]
+    public void The_geometric_check_on_Chens_scales_says_in_one_line_which_terms_reach_0()
+    {
+        var prepared = DecisionEngine.Prepare(Published.Chen2000WorkedExample.Build());
+        var geometric = MethodCrossCheck.Run(prepared, prepared.Analyze()).Single(m => m.Method == "aggregation:geometric");
+        Assert.Empty(geometric.Ranking);
+        Assert.Null(geometric.KendallTau);
+        Assert.Equal(
+            "not applicable: the geometric mean needs scales whose terms all lie above 0, and \"Very poor\", \"Poor\" on the rating scale and \"Very low\", \"Low\" on the importance scale reach 0 (one such rating would decide a cell alone)",
+            geometric.Note);
+    }
+
+    [Fact]
     public void A_method_the_engine_refuses_is_reported_as_not_applicable_with_the_reason()
     {
         // Stands in for the engine refusing the geometric mean on a scale with a term of value 0.
