@@ -49,16 +49,38 @@ internal static class RobustnessRenderer
         output.WriteLine(string.Create(CultureInfo.InvariantCulture,
             $"Rank acceptability ({a.Draws:N0} draws of {source} and ratings within the panel's terms; seed {a.Seed})"));
         var n = a.Alternatives.Count;
-        var table = new TextTable("Id", "Name", "Rank 1", "95% interval", $"Share of rank 1…{n} (%)").AlignRight(2, 3);
+        var table = new TextTable("Id", "Name", "Rank 1", "95% interval", "Overall", $"Share of rank 1…{n} (%)").AlignRight(2, 3, 4);
         var byId = a.Alternatives.ToDictionary(x => x.Alternative);
-        foreach (var id in result.Ranking.Select(r => r.Alternative).Where(byId.ContainsKey))
+        var ranked = result.Ranking.Select(r => r.Alternative).Where(byId.ContainsKey).ToArray();
+        foreach (var id in ranked)
         {
             var x = byId[id];
             table.Add(id, names.Alternative(id), Percent(x.Ranks[0]), $"{Percent(x.Intervals[0].Low)}–{Percent(x.Intervals[0].High)}",
-                string.Join(" ", x.Ranks.Select(Compact)));
+                Percent(x.Holistic), string.Join(" ", x.Ranks.Select(Compact)));
         }
 
         table.Write(output);
+        output.WriteLine(n > 1
+            ? $"  Overall: overall acceptability, each rank's share counted in full for first place down to nothing for last (rank r counts (n − r)/(n − 1))."
+            : "  Overall: overall acceptability, the share of first place.");
+
+        if (a.CentralWeights.Count == 0)
+        {
+            return;
+        }
+
+        output.WriteLine();
+        output.WriteLine("Weights under which each wins, on average, and how often it still wins at them when only the ratings vary");
+        var central = new TextTable("Id", "Name", "Confidence at its central weights", "Central weights").AlignRight(2);
+        var byWinner = a.CentralWeights.ToDictionary(c => c.Alternative);
+        foreach (var id in ranked.Where(byWinner.ContainsKey))
+        {
+            var c = byWinner[id];
+            central.Add(id, names.Alternative(id), Percent(c.Confidence),
+                string.Join(", ", c.Criteria.Zip(c.Weights, (criterion, w) => $"{criterion} {Compact(w)}")));
+        }
+
+        central.Write(output);
     }
 
     private static void Critical(CriticalChangesResult c, Names names, TextWriter output)

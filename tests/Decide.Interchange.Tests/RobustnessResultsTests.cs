@@ -258,6 +258,27 @@ public sealed class RobustnessResultsTests
     }
 
     [Fact]
+    public void The_holistic_index_and_the_confidence_factors_are_carried_as_computed()
+    {
+        var json = BusStop.Value.Json;
+        var acceptability = BusStop.Value.Robustness.Sensitivity.Acceptability;
+        var entries = At(json, "sensitivity.acceptability").EnumerateArray().ToArray();
+        for (var i = 0; i < entries.Length; i++)
+        {
+            Assert.Equal(acceptability.Alternatives[i].Alternative, entries[i].GetProperty("alternative").GetString());
+            Assert.Equal(acceptability.Alternatives[i].Holistic, entries[i].GetProperty("holistic").GetDouble());
+        }
+
+        var central = At(json, "sensitivity.centralWeights").EnumerateArray().ToArray();
+        Assert.Equal(acceptability.CentralWeights.Count, central.Length);
+        for (var i = 0; i < central.Length; i++)
+        {
+            Assert.Equal(acceptability.CentralWeights[i].Alternative, central[i].GetProperty("alternative").GetString());
+            Assert.Equal(acceptability.CentralWeights[i].Confidence, central[i].GetProperty("confidence").GetDouble());
+        }
+    }
+
+    [Fact]
     public void Agreement_carries_the_concordance_and_each_flagged_cells_terms_by_assessor()
     {
         var json = BusStop.Value.Json;

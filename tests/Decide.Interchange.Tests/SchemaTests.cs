@@ -101,6 +101,18 @@ public sealed class SchemaTests
         Assert.False(Schemas.IsValid(Schemas.Results, noPair.ToJsonString()));
     }
 
+    [Theory]
+    [InlineData("acceptability", "holistic")]
+    [InlineData("centralWeights", "confidence")]
+    public void The_results_schema_requires_the_holistic_index_and_the_confidence_factor(string list, string member)
+    {
+        var results = JsonNode.Parse(WithRobustness(EvaluationFileReader.Read(Files.PairwiseText)))!.AsObject();
+        Assert.True(Schemas.IsValid(Schemas.Results, results.ToJsonString()));
+        results["sensitivity"]![list]!.AsArray()[0]!.AsObject().Remove(member);
+
+        Assert.False(Schemas.IsValid(Schemas.Results, results.ToJsonString()));
+    }
+
     private static string WithRobustness(EvaluationFile read)
     {
         var prepared = DecisionEngine.Prepare(read.Evaluation);

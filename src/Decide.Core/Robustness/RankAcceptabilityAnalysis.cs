@@ -7,19 +7,25 @@ namespace Decide.Core.Robustness;
 
 /// <summary>
 /// Stochastic multicriteria acceptability analysis: how often each alternative takes each rank when the weights
-/// and the ratings vary within what the panel said.
+/// and the ratings vary within what the panel said, the weights under which each wins, and how sure a win is at
+/// those weights.
 /// </summary>
 /// <remarks>
 /// Lahdelma, Hokkanen &amp; Salminen (1998), "SMAA – Stochastic multiobjective acceptability analysis", EJOR
-/// 106:137–143; rank acceptability indices as in SMAA-2 (Lahdelma &amp; Salminen 2001, Operations Research
-/// 49(3):444–454). Each draw takes a crisp weight per criterion from the triangular distribution on its aggregated
-/// fuzzy weight (or a vector uniform on the simplex: sorted uniforms' successive differences), and a crisp rating
-/// per cell from the triangular distribution on its aggregated TFN (numeric values stay as measured); then runs
-/// TOPSIS with the evaluation's ideal points. Ranks within a draw are positions (ties, which have probability 0,
-/// go by input order), so the shares sum to 1 over ranks and over alternatives.
-/// Draws are split into blocks of <see cref="BlockSize"/>; block b uses its own generator stream (seed, b) and
-/// block results are combined in block order, so the output does not depend on the number of threads.
-/// The per-draw loop allocates nothing.
+/// 106:137–143; rank acceptability indices, central weight vectors, confidence factors and the holistic
+/// acceptability index as in SMAA-2 (Lahdelma &amp; Salminen 2001, Operations Research 49(3):444–454). Each draw
+/// takes a crisp weight per criterion from the triangular distribution on its aggregated fuzzy weight (or a vector
+/// uniform on the simplex: sorted uniforms' successive differences), and a crisp rating per cell from the
+/// triangular distribution on its aggregated TFN (numeric values stay as measured); then runs TOPSIS with the
+/// evaluation's ideal points. Alternatives whose closeness ties within <see cref="FuzzyTopsis.TieTolerance"/> (as
+/// crisp cells make likely) share the draw: k tied at positions p … p + k − 1 each get 1/k of a draw at each of
+/// those positions, and 1/k of the draw's weight vector towards their central weights; so the shares sum to 1
+/// over ranks and over alternatives. A second pass per alternative that ever ranks first fixes the weights at its
+/// central weight vector and draws only the ratings (the same number of draws), giving its confidence factor.
+/// Draws are split into blocks of <see cref="BlockSize"/>; block b of the first pass uses the generator stream
+/// (seed, b), block b of alternative i's confidence pass the stream (seed, (i + 1)·2³² + b), and block results are
+/// combined in block order, so the output does not depend on the number of threads. The per-draw loop allocates
+/// nothing.
 /// </remarks>
 public static class RankAcceptabilityAnalysis
 {
@@ -31,7 +37,7 @@ public static class RankAcceptabilityAnalysis
 
     /// <summary>Runs the analysis.</summary>
     /// <param name="prepared">The prepared evaluation.</param>
-    /// <param name="draws">Number of draws, at least 1.</param>
+    /// <param name="draws">Number of draws, at least 1 (each confidence pass makes as many again).</param>
     /// <param name="seed">Seed.</param>
     /// <param name="weights">Fuzzy (default) or uniform weights.</param>
     /// <param name="threads">Maximum degree of parallelism (1 = sequential).</param>
@@ -43,19 +49,18 @@ public static class RankAcceptabilityAnalysis
         ArgumentOutOfRangeException.ThrowIfLessThan(threads, 1);
         int n = prepared.Alternatives.Count, m = prepared.Criteria.Count;
         var blocks = (draws + BlockSize - 1) / BlockSize;
-        var counts = new long[blocks][];
+        var counts = new double[blocks][];
         var central = new double[blocks][];
         var options = new ParallelOptions { MaxDegreeOfParallelism = threads };
         Parallel.For(0, blocks, options, b =>
         {
             var block = new Block(prepared, weights);
-            var size = Math.Min(BlockSize, draws - (b * BlockSize));
-            block.Run(seed, (ulong)b, size);
+            block.Run(seed, (ulong)b, Size(draws, b));
             counts[b] = block.Counts;
             central[b] = block.Central;
         });
 
-        var totalCounts = new long[n * n];
+        var totalCounts = new double[n * n];
         var totalCentral = new double[n * m];
         for (var b = 0; b < blocks; b++)
         {
@@ -70,30 +75,92 @@ public static class RankAcceptabilityAnalysis
             }
         }
 
+        // Central weight vectors wᵢᶜ for every alternative that ranks first in some draw.
+        var winners = new List<(int Index, double[] Weights)>();
+        for (var i = 0; i < n; i++)
+        {
+            var firsts = totalCounts[i * n];
+            if (firsts > 0)
+            {
+                winners.Add((i, Enumerable.Range(0, m).Select(j => totalCentral[(i * m) + j] / firsts).ToArray()));
+            }
+        }
+
+        var confidence = Confidence(prepared, winners, draws, seed, blocks, options);
+        var alpha = MetaWeights(n);
         var alternatives = new RankAcceptability[n];
-        var centralVectors = new List<CentralWeightVector>();
-        var criteria = prepared.Criteria.Select(c => c.Id).ToArray();
         for (var i = 0; i < n; i++)
         {
             var shares = new double[n];
             var intervals = new ShareInterval[n];
+            double holistic = 0;
             for (var r = 0; r < n; r++)
             {
-                shares[r] = (double)totalCounts[(i * n) + r] / draws;
+                // A share is a sum of draws and fractions of tied draws; the clamp keeps rounding inside [0, 1].
+                shares[r] = Math.Clamp(totalCounts[(i * n) + r] / draws, 0, 1);
                 intervals[r] = Wilson(shares[r], draws);
+                holistic += alpha[r] * shares[r];
             }
 
-            alternatives[i] = new RankAcceptability(prepared.Alternatives[i].Id, shares, intervals);
-            var firsts = totalCounts[i * n];
-            if (firsts > 0)
-            {
-                centralVectors.Add(new CentralWeightVector(prepared.Alternatives[i].Id, criteria,
-                    Enumerable.Range(0, m).Select(j => totalCentral[(i * m) + j] / firsts).ToArray()));
-            }
+            alternatives[i] = new RankAcceptability(prepared.Alternatives[i].Id, shares, intervals, Math.Clamp(holistic, 0, 1));
         }
 
+        var criteria = prepared.Criteria.Select(c => c.Id).ToArray();
+        var centralVectors = winners.Select((w, k) =>
+            new CentralWeightVector(prepared.Alternatives[w.Index].Id, criteria, w.Weights, confidence[k])).ToArray();
         return new AcceptabilityResult(draws, seed, weights, alternatives, centralVectors);
     }
+
+    /// <summary>
+    /// The meta-weights αʳ of the holistic acceptability index aᵢʰ = Σᵣ αʳ bᵢʳ (Lahdelma &amp; Salminen 2001): the
+    /// linear choice αʳ = (n − r)/(n − 1), so α¹ = 1 ≥ α² ≥ … ≥ αⁿ = 0 (a single alternative gets α¹ = 1).
+    /// </summary>
+    /// <param name="alternatives">n, the number of alternatives ranked (0 gives an empty list).</param>
+    /// <returns>α¹ … αⁿ, each in [0, 1].</returns>
+    public static double[] MetaWeights(int alternatives)
+    {
+        ArgumentOutOfRangeException.ThrowIfNegative(alternatives);
+        var alpha = new double[alternatives];
+        for (var r = 1; r <= alternatives; r++)
+        {
+            alpha[r - 1] = alternatives == 1 ? 1 : (double)(alternatives - r) / (alternatives - 1);
+        }
+
+        return alpha;
+    }
+
+    /// <summary>
+    /// Confidence factors pᵢᶜ (Lahdelma &amp; Salminen 2001): per winner, the share of draws of the ratings alone in
+    /// which it ranks first when the weights are its central weight vector (tied firsts share the draw).
+    /// </summary>
+    private static double[] Confidence(
+        PreparedEvaluation prepared, List<(int Index, double[] Weights)> winners, int draws, ulong seed, int blocks, ParallelOptions options)
+    {
+        var firsts = new double[winners.Count * blocks];
+        Parallel.For(0, firsts.Length, options, x =>
+        {
+            var (k, b) = Math.DivRem(x, blocks);
+            var (index, weights) = winners[k];
+            var block = new Block(prepared, AcceptabilityWeights.Fuzzy);
+            firsts[x] = block.RunFixed(seed, ((ulong)(index + 1) << 32) + (ulong)b, Size(draws, b), weights, index);
+        });
+
+        var confidence = new double[winners.Count];
+        for (var k = 0; k < winners.Count; k++)
+        {
+            double total = 0;
+            for (var b = 0; b < blocks; b++)
+            {
+                total += firsts[(k * blocks) + b];
+            }
+
+            confidence[k] = Math.Clamp(total / draws, 0, 1);
+        }
+
+        return confidence;
+    }
+
+    private static int Size(int draws, int block) => Math.Min(BlockSize, draws - (block * BlockSize));
 
     /// <summary>Wilson score interval for a share p̂ of N draws at 95%.</summary>
     public static ShareInterval Wilson(double share, int draws)
@@ -125,18 +192,19 @@ public static class RankAcceptabilityAnalysis
             _matrix = new Tfn[n * m];
             _crisp = new double[m];
             _uniforms = new double[m + 1];
-            Counts = new long[n * n];
+            Counts = new double[n * n];
             Central = new double[n * m];
         }
 
-        public long[] Counts { get; }
+        /// <summary>Draws (and fractions of tied draws) per alternative i and position r, at i·n + r.</summary>
+        public double[] Counts { get; }
 
+        /// <summary>Per alternative i and criterion j (at i·m + j): the sum of the weight shares of the draws it wins.</summary>
         public double[] Central { get; }
 
         public void Run(ulong seed, ulong stream, int draws)
         {
             var random = new SeededRandom(seed, stream);
-            var source = _prepared.Matrix;
             var fuzzyWeights = _prepared.FuzzyWeights;
             var weights = _workspace.Weights;
             int n = _prepared.Alternatives.Count, m = _prepared.Criteria.Count;
@@ -150,28 +218,90 @@ public static class RankAcceptabilityAnalysis
                     total += _crisp[j];
                 }
 
-                for (var x = 0; x < _matrix.Length; x++)
-                {
-                    var t = source[x];
-                    var v = random.NextTriangular(t.Lower, t.Middle, t.Upper);
-                    _matrix[x] = Tfn.Unchecked(v, v, v);
-                }
-
+                DrawRatings(ref random);
                 _workspace.Evaluate(_matrix, _prepared.IsCost, weights, _prepared.Source.Options.Ideal);
                 var order = _workspace.Order;
-                for (var position = 0; position < n; position++)
+                var closeness = _workspace.Closeness;
+                for (var start = 0; start < n;)
                 {
-                    Counts[(order[position] * n) + position]++;
+                    // The tied group at positions start … end − 1 (each within the tolerance of the one before, as
+                    // FuzzyTopsis.Rank groups them) shares those positions equally.
+                    var end = start + 1;
+                    while (end < n && closeness[order[end - 1]] - closeness[order[end]] <= FuzzyTopsis.TieTolerance)
+                    {
+                        end++;
+                    }
+
+                    var share = 1.0 / (end - start);
+                    for (var q = start; q < end; q++)
+                    {
+                        var row = order[q] * n;
+                        for (var r = start; r < end; r++)
+                        {
+                            Counts[row + r] += share;
+                        }
+
+                        if (start == 0 && total > 0)
+                        {
+                            var first = order[q] * m;
+                            for (var j = 0; j < m; j++)
+                            {
+                                Central[first + j] += share * _crisp[j] / total;
+                            }
+                        }
+                    }
+
+                    start = end;
+                }
+            }
+        }
+
+        /// <summary>
+        /// Draws the ratings only, with the weights fixed at <paramref name="shares"/>, and returns in how many draws
+        /// (tied firsts counting 1/k) alternative <paramref name="alternative"/> ranks first.
+        /// </summary>
+        public double RunFixed(ulong seed, ulong stream, int draws, double[] shares, int alternative)
+        {
+            var random = new SeededRandom(seed, stream);
+            var weights = _workspace.Weights;
+            int n = _prepared.Alternatives.Count, m = _prepared.Criteria.Count;
+            for (var j = 0; j < m; j++)
+            {
+                weights[j] = Tfn.Unchecked(shares[j], shares[j], shares[j]);
+            }
+
+            double firsts = 0;
+            for (var d = 0; d < draws; d++)
+            {
+                DrawRatings(ref random);
+                _workspace.Evaluate(_matrix, _prepared.IsCost, weights, _prepared.Source.Options.Ideal);
+                var order = _workspace.Order;
+                var closeness = _workspace.Closeness;
+                var tied = 1;
+                var among = order[0] == alternative;
+                while (tied < n && closeness[order[tied - 1]] - closeness[order[tied]] <= FuzzyTopsis.TieTolerance)
+                {
+                    among |= order[tied] == alternative;
+                    tied++;
                 }
 
-                if (total > 0)
+                if (among)
                 {
-                    var first = order[0] * m;
-                    for (var j = 0; j < m; j++)
-                    {
-                        Central[first + j] += _crisp[j] / total;
-                    }
+                    firsts += 1.0 / tied;
                 }
+            }
+
+            return firsts;
+        }
+
+        private void DrawRatings(ref SeededRandom random)
+        {
+            var source = _prepared.Matrix;
+            for (var x = 0; x < _matrix.Length; x++)
+            {
+                var t = source[x];
+                var v = random.NextTriangular(t.Lower, t.Middle, t.Upper);
+                _matrix[x] = Tfn.Unchecked(v, v, v);
             }
         }
 

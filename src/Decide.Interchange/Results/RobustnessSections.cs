@@ -21,9 +21,9 @@ internal static class RobustnessSections
             acceptability.Weights == AcceptabilityWeights.Uniform ? "uniform" : "fuzzy",
             acceptability.Alternatives.Select(a => new AcceptabilityEntry(
                 a.Alternative, a.Ranks.ToArray(),
-                a.Intervals.Select(i => (IReadOnlyList<double>)[i.Low, i.High]).ToArray())).ToArray(),
+                a.Intervals.Select(i => (IReadOnlyList<double>)[i.Low, i.High]).ToArray(), a.Holistic)).ToArray(),
             acceptability.CentralWeights.Select(c => new CentralWeightsEntry(
-                c.Alternative, Map(c.Criteria, c.Weights))).ToArray(),
+                c.Alternative, Map(c.Criteria, c.Weights), c.Confidence)).ToArray(),
             s.LeaveOneOut.Select(l => new LeaveOneOutEntry(l.Assessor, l.Winner, l.Ranking.ToArray(), l.WinnerChanged, l.Problem)).ToArray(),
             s.WithoutAlternative.Select(w => new WithoutAlternativeEntry(
                 w.Alternative, w.Ranking.ToArray(),
