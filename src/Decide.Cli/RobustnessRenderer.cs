@@ -114,7 +114,7 @@ internal static class RobustnessRenderer
             string.Create(CultureInfo.InvariantCulture, $"{(m.Weight - m.Current) * 100:+0.0;-0.0} pp ({m.Relative:0.#}% of its share)"),
             m.Delta is { } delta
                 ? string.Create(CultureInfo.InvariantCulture, $"{-delta * 100:+0.0;-0.0} pp ({-m.DeltaRelative!.Value:+0.#;-0.#}% of its weight)")
-                : "needs the weight above 100%");
+                : "only with the whole weight");
     }
 
     private static void LeaveOneOut(IReadOnlyList<LeaveOneOutResult> results, Names names, TextWriter output)

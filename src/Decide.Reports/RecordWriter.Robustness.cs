@@ -70,7 +70,7 @@ internal sealed partial class RecordWriter
                 [
                     _names.Criterion(c.Criterion), _names.Alternative(c.Leader), _names.Alternative(c.Challenger), RecordText.Percent(c.Current),
                     RecordText.Percent(c.Weight!.Value), Signed((c.Weight.Value - c.Current) * 100, 1), Signed((c.Weight.Value - c.Current) / c.Current * 100, 0) + "%",
-                    c.Delta is { } d ? Signed(-d * 100, 1) + (c.DeltaShare != c.Weight ? $" (at {RecordText.Percent(c.DeltaShare!.Value)})" : "") : "needs weight above 100%",
+                    c.Delta is { } d ? Signed(-d * 100, 1) + (c.DeltaShare != c.Weight ? $" (at {RecordText.Percent(c.DeltaShare!.Value)})" : "") : "only with the whole weight",
                     c.DeltaRelative is { } r ? Signed(-r, 0) + "%" : "—",
                 ]));
 
@@ -86,12 +86,12 @@ internal sealed partial class RecordWriter
                     ("any place: weight alone", criticalChanges.AnyAbsolute),
                     ("any place: weight alone, % of it", criticalChanges.AnyRelative),
                 }.Select(x => (IReadOnlyList<string>)(x.Most is not { } m
-                    ? [x.Title, "none", x.Title.EndsWith("share", StringComparison.Ordinal) ? "no single change of weight reverses such a pair" : "no change of this weight alone, kept within 0–100%, reverses such a pair", "", ""]
+                    ? [x.Title, "none", x.Title.EndsWith("share", StringComparison.Ordinal) ? "no single change of weight reverses such a pair" : "no change of this weight alone reverses such a pair", "", ""]
                     :
                     [
                         x.Title, _names.Criterion(m.Criterion), $"{_names.Alternative(m.Challenger)} overtakes {_names.Alternative(m.Leader)}",
                         $"{RecordText.Percent(m.Current)} → {RecordText.Percent(m.Weight)}",
-                        m.Delta is { } d ? $"{Signed(-d * 100, 1)} ({Signed(-m.DeltaRelative!.Value, 0)}%)" : "needs weight above 100%",
+                        m.Delta is { } d ? $"{Signed(-d * 100, 1)} ({Signed(-m.DeltaRelative!.Value, 0)}%)" : "only with the whole weight",
                     ])));
         }
 
@@ -107,13 +107,29 @@ internal sealed partial class RecordWriter
             var ranks = acceptability.Alternatives.Max(a => a.Ranks.Count);
             var byRanking = acceptability.Alternatives.OrderBy(a => colours.GetValueOrDefault(a.Alternative, int.MaxValue)).ToArray();
             _flow.Table(
-                [new("Alternative", 3), .. Enumerable.Range(1, ranks).Select(r => new TableColumn($"Rank {r}", 1, CellAlign.Right)), new("First: 95% interval", 1.8, CellAlign.Right)],
+                [new("Alternative", 3), .. Enumerable.Range(1, ranks).Select(r => new TableColumn($"Rank {r}", 1, CellAlign.Right)), new("First: 95% interval", 1.8, CellAlign.Right), new("Overall", 1.1, CellAlign.Right)],
                 byRanking.Select(a => (IReadOnlyList<string>)
                 [
                     _names.Alternative(a.Alternative),
                     .. Enumerable.Range(0, ranks).Select(r => r < a.Ranks.Count ? RecordText.Percent(a.Ranks[r]) : ""),
                     $"{RecordText.Percent(a.Intervals[0].Low)}–{RecordText.Percent(a.Intervals[0].High)}",
+                    RecordText.Percent(a.Holistic),
                 ]));
+            _flow.Paragraph(ranks > 1
+                ? $"Overall: the holistic acceptability of SMAA-2 (Lahdelma & Salminen 2001), each rank's share counted in full for first place down to nothing for last (rank r counts (n − r)/(n − 1))."
+                : "Overall: the share of first place.", _style.Cell, _style.MutedBrush);
+            if (acceptability.CentralWeights.Count > 0)
+            {
+                _flow.Paragraph("Central weights: the average weights of the draws each alternative wins, and its confidence factor, how often it still ranks first at exactly those weights when only the ratings vary (Lahdelma & Salminen 2001).", _style.Cell, _style.MutedBrush);
+                _flow.Table(
+                    [new("Alternative", 2.6), new("Confidence at its central weights", 1.6, CellAlign.Right), new("Central weights", 7)],
+                    acceptability.CentralWeights.OrderBy(c => colours.GetValueOrDefault(c.Alternative, int.MaxValue)).Select(c => (IReadOnlyList<string>)
+                    [
+                        _names.Alternative(c.Alternative),
+                        RecordText.Percent(c.Confidence),
+                        string.Join(", ", c.Criteria.Zip(c.Weights, (criterion, w) => $"{_names.Criterion(criterion)} {RecordText.Percent(w)}")),
+                    ]));
+            }
         }
 
         _flow.Heading("Without each assessor (leave-one-out)");

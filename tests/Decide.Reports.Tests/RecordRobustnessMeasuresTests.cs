@@ -20,7 +20,7 @@ public sealed class RecordRobustnessMeasuresTests
         Assert.Contains(PdfText.Squeeze(share + weightAlone), Text.Squeezed);
         if (critical.TopAbsolute is null)
         {
-            Assert.Contains(PdfText.Squeeze("first place: weight alone none no change of this weight alone, kept within 0–100%, reverses such a pair"), Text.Squeezed);
+            Assert.Contains(PdfText.Squeeze("first place: weight alone none no change of this weight alone reverses such a pair"), Text.Squeezed);
         }
     }
 
@@ -29,6 +29,19 @@ public sealed class RecordRobustnessMeasuresTests
     {
         Assert.Contains(PdfText.Squeeze("weighted total of scores on the rating scale"), Text.Squeezed);
         Assert.DoesNotContain(PdfText.Squeeze("weighted sum"), Text.Squeezed);
+    }
+
+    [Fact]
+    public void Rank_acceptability_prints_each_alternatives_overall_acceptability_and_confidence_at_its_central_weights()
+    {
+        var acceptability = SampleRecords.BusStop.Robustness.Sensitivity.Acceptability;
+        Assert.Contains(PdfText.Squeeze("First: 95% interval Overall"), Text.Squeezed);
+        Assert.Contains(PdfText.Squeeze("Confidence at its central weights"), Text.Squeezed);
+        var top = acceptability.Alternatives.MaxBy(a => a.Ranks[0])!;
+        var interval = $"{Percent(top.Intervals[0].Low)}–{Percent(top.Intervals[0].High)}";
+        Assert.Contains(PdfText.Squeeze(interval + Percent(top.Holistic)), Text.Squeezed);
+        var central = acceptability.CentralWeights.Single(c => c.Alternative == top.Alternative);
+        Assert.Contains(PdfText.Squeeze(Percent(central.Confidence)), Text.Squeezed);
     }
 
     private static string Signed(double value, int decimals) =>
