@@ -122,12 +122,18 @@ public static class EvaluationFileWriter
         WriteValues(w, e.Values);
         WriteGates(w, e.Gates);
 
-        w.WriteStartObject("options");
-        w.WriteString("aggregation", FormatWords.Of(e.Options.Aggregation));
-        w.WriteString("ideal", FormatWords.Of(e.Options.Ideal));
-        w.WriteNumber("divergenceTolerance", e.Options.DivergenceTolerance);
-        w.WriteString("acceptabilityWeights", FormatWords.Of(e.Options.AcceptabilityWeights));
+        WriteOptions(w, e.Options);
         w.WriteEndObject();
+    }
+
+    /// <summary>The <c>options</c> member, written in full; the plan writer uses it too.</summary>
+    internal static void WriteOptions(Utf8JsonWriter w, AnalysisOptions options)
+    {
+        w.WriteStartObject("options");
+        w.WriteString("aggregation", FormatWords.Of(options.Aggregation));
+        w.WriteString("ideal", FormatWords.Of(options.Ideal));
+        w.WriteNumber("divergenceTolerance", options.DivergenceTolerance);
+        w.WriteString("acceptabilityWeights", FormatWords.Of(options.AcceptabilityWeights));
         w.WriteEndObject();
     }
 

@@ -61,7 +61,7 @@ internal sealed partial class RecordWriter
         }
         else
         {
-            _flow.Paragraph("The smallest change of one criterion's weight that puts the challenger ahead of the leader, in two measures. Change of share: the share the criterion must reach, the others keeping their proportions; this is the figure panels publish, and the one the screens show. Change of weight alone (Triantaphyllou and Sánchez 1997): the criterion's weight alone is changed, the others are left as they are, and then all are rescaled to 100%; the smallest such change whose weight stays between 0 and 100%. Both describe the same reversals: a weight w changed by d gives the share (w + d)/(1 + d). Smallest change of share first.", _style.Cell, _style.MutedBrush);
+            _flow.Paragraph("The smallest change of one criterion's weight that puts the challenger ahead of the leader, in two measures. Change of share: the share the criterion must reach, the others keeping their proportions; this is the figure panels publish, and the one the screens show. Change of weight alone (Triantaphyllou and Sánchez 1997): the criterion's weight alone is changed, the others are left as they are, and then all are rescaled to 100%; the smallest such change that leaves the weight at 0 or more. Both describe the same reversals: a weight w changed by d gives the share (w + d)/(1 + d). Smallest change of share first.", _style.Cell, _style.MutedBrush);
             _flow.Table(
                 [new("Criterion", 2.3), new("Leader", 1.9), new("Challenger", 1.9), new("Share now", 1.05, CellAlign.Right), new("Reverses at", 1.25, CellAlign.Right),
                  new("Share change (points)", 1.1, CellAlign.Right), new("Share change (% of share)", 1.1, CellAlign.Right),

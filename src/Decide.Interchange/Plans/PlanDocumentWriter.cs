@@ -67,12 +67,7 @@ public static class PlanDocumentWriter
 
         w.WriteEndArray();
         w.WriteString("weighting", FormatWords.Of(plan.Weighting));
-        w.WriteStartObject("options");
-        w.WriteString("aggregation", FormatWords.Of(plan.Options.Aggregation));
-        w.WriteString("ideal", FormatWords.Of(plan.Options.Ideal));
-        w.WriteNumber("divergenceTolerance", plan.Options.DivergenceTolerance);
-        w.WriteString("acceptabilityWeights", FormatWords.Of(plan.Options.AcceptabilityWeights));
-        w.WriteEndObject();
+        EvaluationFileWriter.WriteOptions(w, plan.Options);
         w.WriteEndObject();
     }
 
