@@ -23,7 +23,8 @@ public static class ResultDigest
             foreach (var weighting in new[] { WeightingMethod.Importance, WeightingMethod.Pairwise })
             {
                 var evaluation = SyntheticEvaluations.Create(size, weighting);
-                foreach (var options in new[] { new AnalysisOptions(), new AnalysisOptions(AggregationRule.Geometric, IdealPoints.Extreme) })
+                // The geometric mean is refused on these (Chen) scales, whose lowest terms reach 0 (ADR 18).
+                foreach (var options in new[] { new AnalysisOptions(), new AnalysisOptions(AggregationRule.Mean, IdealPoints.Extreme) })
                 {
                     var result = DecisionEngine.Analyze(evaluation with { Options = options });
                     output.WriteLine($"{size.Name,-8} {weighting,-10} {options.Aggregation,-9} {options.Ideal,-7} analysis {Hash(result)}");
