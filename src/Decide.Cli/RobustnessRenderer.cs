@@ -61,7 +61,7 @@ internal static class RobustnessRenderer
 
         table.Write(output);
         output.WriteLine(n > 1
-            ? $"  Overall: overall acceptability, each rank's share counted in full for first place down to nothing for last (rank r counts (n − r)/(n − 1))."
+            ? "  Overall: overall acceptability, each rank's share counted in equal steps from in full for first place to not at all for last."
             : "  Overall: overall acceptability, the share of first place.");
 
         if (a.CentralWeights.Count == 0)
@@ -77,7 +77,7 @@ internal static class RobustnessRenderer
         {
             var c = byWinner[id];
             central.Add(id, names.Alternative(id), Percent(c.Confidence),
-                string.Join(", ", c.Criteria.Zip(c.Weights, (criterion, w) => $"{criterion} {Compact(w)}")));
+                string.Join(", ", c.Criteria.Zip(c.Weights, (criterion, w) => $"{criterion} {Percent(w)}")));
         }
 
         central.Write(output);
