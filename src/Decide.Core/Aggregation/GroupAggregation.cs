@@ -38,6 +38,37 @@ public static class GroupAggregation
         return rule == AggregationRule.Mean ? Mean(values, weights, total) : Geometric(values, weights, total);
     }
 
+    /// <summary>
+    /// The scales the geometric mean would multiply values of in <paramref name="evaluation"/> — the rating scale when a
+    /// criterion is linguistic, the importance scale under importance weighting — with their terms whose lower value is
+    /// 0 or below. One rating of such a term sets the panel's value to 0 whatever the others said (a veto), so the
+    /// validator refuses the geometric mean when this list is not empty, and the method cross-check says why.
+    /// </summary>
+    public static IReadOnlyList<(string Scale, IReadOnlyList<Scales.LinguisticTerm> Terms)> TermsAtZero(Evaluation evaluation)
+    {
+        var found = new List<(string, IReadOnlyList<Scales.LinguisticTerm>)>();
+        void Check(string role, Scales.LinguisticScale scale)
+        {
+            var zero = scale.Terms.Where(t => t.Value.Lower <= 0).ToArray();
+            if (zero.Length > 0)
+            {
+                found.Add((role, zero));
+            }
+        }
+
+        if (evaluation.Criteria.Any(c => c.Kind == CriterionKind.Linguistic))
+        {
+            Check("rating scale", evaluation.RatingScale);
+        }
+
+        if (evaluation.Weighting == WeightingMethod.Importance)
+        {
+            Check("importance scale", evaluation.ImportanceScale);
+        }
+
+        return found;
+    }
+
     private static Tfn Mean(ReadOnlySpan<Tfn> values, ReadOnlySpan<double> weights, double total)
     {
         double l = 0, m = 0, u = 0;

@@ -101,26 +101,11 @@ public static class EvaluationValidator
                 return;
             }
 
-            var scales = new List<(string Role, Scales.LinguisticScale Scale)>();
-            if (e.Criteria.Any(c => c.Kind == CriterionKind.Linguistic))
+            foreach (var (role, zero) in Aggregation.GroupAggregation.TermsAtZero(e))
             {
-                scales.Add(("rating scale", e.RatingScale));
-            }
-
-            if (e.Weighting == WeightingMethod.Importance)
-            {
-                scales.Add(("importance scale", e.ImportanceScale));
-            }
-
-            foreach (var (role, scale) in scales)
-            {
-                var zero = scale.Terms.Where(t => t.Value.Lower <= 0).ToArray();
-                if (zero.Length > 0)
-                {
-                    var terms = string.Join(", ", zero.Select(t => $"{t.Code} ({t.Label}) {t.Value}"));
-                    Add("$.options.aggregation",
-                        $"the geometric mean multiplies the assessors' values, so on the {role} one rating of a term whose lowest value is 0 would set the panel's value to 0 whatever the others said; {terms} {(zero.Length == 1 ? "has" : "have")} a value of 0. Use the weighted mean, or {(role.StartsWith('i') ? "an" : "a")} {role} whose terms are all above 0");
-                }
+                var terms = string.Join(", ", zero.Select(t => $"{t.Code} ({t.Label}) {t.Value}"));
+                Add("$.options.aggregation",
+                    $"the geometric mean multiplies the assessors' values, so on the {role} one rating of a term whose lowest value is 0 would set the panel's value to 0 whatever the others said; {terms} {(zero.Count == 1 ? "has" : "have")} a value of 0. Use the weighted mean, or {(role.StartsWith('i') ? "an" : "a")} {role} whose terms are all above 0");
             }
         }
 

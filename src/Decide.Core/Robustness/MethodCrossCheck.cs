@@ -105,12 +105,8 @@ public static class MethodCrossCheck
         catch (InvalidEvaluationException refused) when (refused.Errors.All(e => e.Path == "$.options.aggregation"))
         {
             // The geometric mean on scales that reach 0: say so in a line, not with the validator's advice.
-            var zero = new[] { ("rating scale", variant.RatingScale), ("importance scale", variant.ImportanceScale) }
-                .Where(x => (x.Item1 == "rating scale" && variant.Criteria.Any(c => c.Kind == CriterionKind.Linguistic))
-                    || (x.Item1 == "importance scale" && variant.Weighting == WeightingMethod.Importance))
-                .Select(x => (Role: x.Item1, Codes: x.Item2.Terms.Where(t => t.Value.Lower <= 0).Select(t => $"\"{t.Label}\"").ToArray()))
-                .Where(x => x.Codes.Length > 0)
-                .Select(x => $"{string.Join(", ", x.Codes)} on the {x.Role}");
+            var zero = Aggregation.GroupAggregation.TermsAtZero(variant)
+                .Select(x => $"{string.Join(", ", x.Terms.Select(t => $"\"{t.Label}\""))} on the {x.Scale}");
             return new MethodComparison(method, description, [], [], null, false,
                 $"not applicable: the geometric mean needs scales whose terms all lie above 0, and {string.Join(" and ", zero)} reach 0 (one such rating would decide a cell alone)");
         }
