@@ -1,4 +1,4 @@
-using Decide.Records;
+using Decide.Recordkeeping;
 using System.CommandLine;
 using System.Security.Cryptography;
 using System.Security.Cryptography.X509Certificates;

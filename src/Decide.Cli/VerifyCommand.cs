@@ -1,4 +1,4 @@
-using Decide.Records;
+using Decide.Recordkeeping;
 using System.CommandLine;
 using Decide.Reports.Verification;
 

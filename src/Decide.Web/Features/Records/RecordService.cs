@@ -5,7 +5,7 @@ using Decide.Core.Robustness;
 using Decide.Data;
 using Decide.Data.Entities;
 using Decide.Interchange;
-using Decide.Records;
+using Decide.Recordkeeping;
 using Decide.Reports.Content;
 using Decide.Reports.Feedback;
 using Decide.Reports.Signing;
@@ -15,9 +15,6 @@ using Decide.Web.Features.Evaluations;
 using Decide.Data.Storage;
 using Decide.Web.Infrastructure;
 using Microsoft.EntityFrameworkCore;
-using ReportApproval = Decide.Reports.Content.Approval;
-using ReportModeration = Decide.Reports.Content.ModerationEntry;
-using ReportPanelMember = Decide.Reports.Content.PanelMember;
 
 namespace Decide.Web.Features.Records;
 
@@ -209,7 +206,7 @@ public sealed class RecordService(
         {
             var mine = conflicts.Where(c => c.UserId == p.UserId).Select(c => $"{c.AlternativeCode}: {c.Statement}{(c.Action is null ? " (recused)" : $" ({c.Action})")}").ToArray();
             var declares = p.Role is PanelRole.Assessor or PanelRole.PriceEvaluator;
-            return new ReportPanelMember(p.User?.DisplayName ?? p.UserId, RoleName(p.Role), p.AssessorCode,
+            return new MemberOnRecord(p.User?.DisplayName ?? p.UserId, RoleName(p.Role), p.AssessorCode,
                 p.Role == PanelRole.Assessor ? p.Weight : null, p.DeclarationSignedAt,
                 declares ? (mine.Length == 0 ? "none declared" : string.Join("; ", mine)) : null);
         }).ToArray();
@@ -217,11 +214,11 @@ public sealed class RecordService(
         var users = await db.Users.AsNoTracking().ToDictionaryAsync(u => u.Id, u => u.DisplayName, ct);
         var moderation = (await db.Moderation.AsNoTracking().Where(x => x.EvaluationId == stored.Id).OrderBy(x => x.Id).ToListAsync(ct))
             .GroupBy(x => (x.AlternativeCode, x.CriterionId)).Select(g => g.Last())
-            .Select(x => new ReportModeration(x.AlternativeCode, x.CriterionId, Originals(x.OriginalsJson), x.Term, x.Reason,
+            .Select(x => new ModerationOnRecord(x.AlternativeCode, x.CriterionId, Originals(x.OriginalsJson), x.Term, x.Reason,
                 users.GetValueOrDefault(x.RecordedBy, x.RecordedBy), x.RecordedAt)).ToArray();
 
         var approvals = (await db.Approvals.AsNoTracking().Where(a => a.EvaluationId == stored.Id).OrderBy(a => a.Id).ToListAsync(ct))
-            .Select(a => new ReportApproval(users.GetValueOrDefault(a.UserId, a.UserId), "Approver", a.ApprovedAt, a.Statement)).ToArray();
+            .Select(a => new ApprovalOnRecord(users.GetValueOrDefault(a.UserId, a.UserId), "Approver", a.ApprovedAt, a.Statement)).ToArray();
 
         var dates = new List<RecordDate> { new("Created", stored.CreatedAt) };
         void Add(string label, DateTimeOffset? when)

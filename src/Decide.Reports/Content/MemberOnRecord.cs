@@ -7,5 +7,5 @@ namespace Decide.Reports.Content;
 /// <param name="Weight">Their weight in aggregation, if they rate.</param>
 /// <param name="DeclarationSignedAt">When they signed the conflict-of-interest and confidentiality declaration; null if not signed or not recorded.</param>
 /// <param name="Conflicts">Interests declared and the measure taken ("none declared", "recused from …").</param>
-public sealed record PanelMember(
+public sealed record MemberOnRecord(
     string Name, string Role, string? AssessorCode, double? Weight, DateTimeOffset? DeclarationSignedAt, string? Conflicts);

@@ -4,7 +4,7 @@ using Decide.Core.Robustness;
 using Decide.Interchange;
 using Decide.Reports.Content;
 
-namespace Decide.Records;
+namespace Decide.Recordkeeping;
 
 /// <summary>
 /// Builds the record's content from an evaluation file alone: what a file cannot hold (declarations, an audit trail,
@@ -29,11 +29,11 @@ public static class RecordContentBuilder
         var panel = evaluation.Assessors.Select(a =>
         {
             var declined = evaluation.Ratings.Where(r => r.Assessor == a.Id && r.Declined is not null).Select(r => r.Declined!).Distinct().ToArray();
-            return new PanelMember(a.Name, "Assessor", a.Id, a.Weight, null,
+            return new MemberOnRecord(a.Name, "Assessor", a.Id, a.Weight, null,
                 declined.Length == 0 ? null : "Declined cells: " + string.Join("; ", declined));
         }).ToArray();
 
-        var moderation = evaluation.Moderated.Select(m => new ModerationEntry(
+        var moderation = evaluation.Moderated.Select(m => new ModerationOnRecord(
             m.Alternative,
             m.Criterion,
             evaluation.Ratings.Where(r => r.Alternative == m.Alternative && r.Criterion == m.Criterion && r.Term is not null)

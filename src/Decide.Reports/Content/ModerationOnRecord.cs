@@ -8,5 +8,5 @@ namespace Decide.Reports.Content;
 /// <param name="Reason">The minute of the discussion.</param>
 /// <param name="By">Who recorded the moderation (or who agreed).</param>
 /// <param name="At">When; null if not recorded.</param>
-public sealed record ModerationEntry(
+public sealed record ModerationOnRecord(
     string Alternative, string Criterion, IReadOnlyList<string> OriginalTerms, string ModeratedTerm, string Reason, string By, DateTimeOffset? At);

@@ -5,7 +5,7 @@ using Decide.Interchange;
 using Decide.Reports;
 using Decide.Reports.Verification;
 
-namespace Decide.Records;
+namespace Decide.Recordkeeping;
 
 /// <summary>
 /// The re-analysis check of <c>decide verify</c>: reads the embedded evaluation file, analyses it again, and looks for

@@ -5,4 +5,4 @@ namespace Decide.Reports.Content;
 /// <param name="Role">In what capacity (panel chair, assessor, approver).</param>
 /// <param name="At">When.</param>
 /// <param name="Statement">What they confirmed, in their words or the service's standard statement.</param>
-public sealed record Approval(string Name, string Role, DateTimeOffset At, string Statement);
+public sealed record ApprovalOnRecord(string Name, string Role, DateTimeOffset At, string Statement);
