@@ -68,30 +68,7 @@ public static class DataSetup
         }
     }
 
-    private static DatabaseOptions Read(IConfiguration configuration)
-    {
-        var section = configuration.GetSection(DatabaseOptions.Section);
-        DatabaseOptions options;
-        try
-        {
-            options = section.Get<DatabaseOptions>() ?? new DatabaseOptions();
-        }
-        catch (InvalidOperationException e)
-        {
-            // The binder's message names the setting and the value it could not convert.
-            throw new InvalidOperationException($"The Database settings cannot be used: {e.Message} (Database:Provider takes Sqlite or Postgres.)", e);
-        }
-
-        if (!Enum.IsDefined(options.Provider))
-        {
-            throw new InvalidOperationException($"Database:Provider '{section["Provider"]}' is not supported; use Sqlite or Postgres.");
-        }
-
-        if (string.IsNullOrWhiteSpace(options.DataFolder))
-        {
-            throw new InvalidOperationException("Database:DataFolder is empty; give a folder for the service's files (default: data).");
-        }
-
-        return options;
-    }
+    private static DatabaseOptions Read(IConfiguration configuration) =>
+        StartupSettings.Read<DatabaseOptions>(configuration, DatabaseOptions.Section, o => o.Problems(),
+            "Database:Provider takes Sqlite or Postgres.");
 }

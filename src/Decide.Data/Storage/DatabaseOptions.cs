@@ -27,4 +27,18 @@ public sealed class DatabaseOptions
 
     /// <summary>Seed the demo evaluation and demo accounts into an empty database.</summary>
     public bool SeedDemo { get; set; } = true;
+
+    /// <summary>Every setting that cannot be used, each a sentence naming its key.</summary>
+    public IEnumerable<string> Problems()
+    {
+        if (!Enum.IsDefined(Provider))
+        {
+            yield return $"Database:Provider '{Provider}' is not supported; use Sqlite or Postgres.";
+        }
+
+        if (string.IsNullOrWhiteSpace(DataFolder))
+        {
+            yield return "Database:DataFolder is empty; give a folder for the service's files (default: data).";
+        }
+    }
 }

@@ -1,3 +1,4 @@
+using Decide.Data.Storage;
 using System.Net;
 using System.Threading.RateLimiting;
 using Microsoft.AspNetCore.Antiforgery;
@@ -20,12 +21,7 @@ public static class SecuritySetup
 
     public static WebApplicationBuilder AddDecideSecurity(this WebApplicationBuilder builder)
     {
-        var options = builder.Configuration.GetSection(SecurityOptions.Section).Get<SecurityOptions>() ?? new SecurityOptions();
-        var problems = options.Problems().ToArray();
-        if (problems.Length > 0)
-        {
-            throw new InvalidOperationException(string.Join(" ", problems));
-        }
+        var options = StartupSettings.Read<SecurityOptions>(builder.Configuration, SecurityOptions.Section, o => o.Problems());
 
         builder.Services.AddSingleton(options);
 

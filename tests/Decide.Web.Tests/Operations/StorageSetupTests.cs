@@ -2,6 +2,8 @@ using Decide.Data;
 using Decide.Data.Entities;
 using Decide.Data.Storage;
 using Decide.Web.Features.Records;
+using Decide.Web.Infrastructure;
+using Microsoft.AspNetCore.Builder;
 using Microsoft.Data.Sqlite;
 using Microsoft.EntityFrameworkCore;
 using Microsoft.Extensions.Configuration;
@@ -53,6 +55,26 @@ public sealed class StorageSetupTests
         Assert.Contains("Signing:CertificatePath", e.Message, StringComparison.Ordinal);
         Assert.Contains(missing, e.Message, StringComparison.Ordinal);
         Assert.Null(SigningOptions.Read(Settings(), Path.GetTempPath()).CertificatePath);
+    }
+
+    [Theory]
+    [InlineData("Security:HttpsPort", "not-a-port", "Security:HttpsPort")]
+    [InlineData("Security:HttpsPort", "70000", "Security:HttpsPort must be a port number")]
+    [InlineData("Security:SignIn:WindowSeconds", "0", "Security:SignIn:WindowSeconds must be at least 1")]
+    public void A_security_setting_that_cannot_be_used_stops_the_start_naming_it(string key, string value, string expected)
+    {
+        var builder = WebApplication.CreateBuilder();
+        builder.Configuration.AddInMemoryCollection([new KeyValuePair<string, string?>(key, value)]);
+        var e = Assert.Throws<InvalidOperationException>(() => builder.AddDecideSecurity());
+        Assert.Contains(expected, e.Message, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void A_database_setting_the_binder_cannot_convert_stops_the_start_naming_it()
+    {
+        var e = Assert.Throws<InvalidOperationException>(() => new ServiceCollection().AddDecideData(Settings(("Database:SeedDemo", "maybe")), Path.GetTempPath()));
+        Assert.Contains("Database:SeedDemo", e.Message, StringComparison.Ordinal);
+        Assert.Contains("maybe", e.Message, StringComparison.Ordinal);
     }
 
     [Fact]

@@ -23,16 +23,17 @@ public sealed class SigningOptions
     /// mistake shows when the service starts, not when the first record is signed.
     /// </summary>
     /// <exception cref="InvalidOperationException">Signing:CertificatePath names no file.</exception>
-    public static SigningOptions Read(IConfiguration configuration, string contentRoot)
-    {
-        var options = configuration.GetSection(Section).Get<SigningOptions>() ?? new SigningOptions();
-        if (!string.IsNullOrWhiteSpace(options.CertificatePath) && !File.Exists(Path.GetFullPath(options.CertificatePath, contentRoot)))
-        {
-            throw new InvalidOperationException(
-                $"Signing:CertificatePath '{Path.GetFullPath(options.CertificatePath, contentRoot)}' does not exist; give the path of a PFX file with the signing certificate and its private key, or leave the setting out to sign with the service's own certificate.");
-        }
+    public static SigningOptions Read(IConfiguration configuration, string contentRoot) =>
+        StartupSettings.Read<SigningOptions>(configuration, Section, o => o.Problems(contentRoot));
 
-        return options;
+    /// <summary>Every setting that cannot be used, each a sentence naming its key; paths are relative to <paramref name="contentRoot"/>.</summary>
+    public IEnumerable<string> Problems(string contentRoot)
+    {
+        if (!string.IsNullOrWhiteSpace(CertificatePath) && !File.Exists(Path.GetFullPath(CertificatePath, contentRoot)))
+        {
+            yield return
+                $"Signing:CertificatePath '{Path.GetFullPath(CertificatePath, contentRoot)}' does not exist; give the path of a PFX file with the signing certificate and its private key, or leave the setting out to sign with the service's own certificate.";
+        }
     }
 }
 
