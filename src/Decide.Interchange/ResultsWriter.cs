@@ -53,8 +53,8 @@ public static class ResultsWriter
             Engine = new EngineDescription("Decide", EngineVersion),
             Method = new MethodDescription(
                 Name(result.Weighting),
-                result.Options.Aggregation == AggregationRule.Geometric ? "geometric" : "mean",
-                result.Options.Ideal == IdealPoints.Extreme ? "extreme" : "unit",
+                FormatWords.Of(result.Options.Aggregation),
+                FormatWords.Of(result.Options.Ideal),
                 result.Weighting == WeightingMethod.Pairwise ? RandomIndex.TableName : null),
             Ranking = result.Ranking.Select(r => new RankingEntry(
                 r.Alternative, AlternativeName(r.Alternative), r.Rank, r.Closeness, r.DPlus, r.DMinus,
@@ -105,7 +105,7 @@ public static class ResultsWriter
             r.IntransitiveTriads.Select(t => (IReadOnlyList<string>)t.ToArray()).ToArray());
     }
 
-    private static string Name(WeightingMethod weighting) => weighting == WeightingMethod.Pairwise ? "pairwise" : "importance";
+    private static string Name(WeightingMethod weighting) => FormatWords.Of(weighting);
 
     private static Dictionary<string, string> Names(IEnumerable<(string Id, string Name)> items)
     {

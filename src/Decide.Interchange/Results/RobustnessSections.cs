@@ -18,7 +18,7 @@ internal static class RobustnessSections
             CriticalChanges(s.CriticalChanges),
             acceptability.Draws,
             acceptability.Seed,
-            acceptability.Weights == AcceptabilityWeights.Uniform ? "uniform" : "fuzzy",
+            FormatWords.Of(acceptability.Weights),
             acceptability.Alternatives.Select(a => new AcceptabilityEntry(
                 a.Alternative, a.Ranks.ToArray(),
                 a.Intervals.Select(i => (IReadOnlyList<double>)[i.Low, i.High]).ToArray(), a.Holistic)).ToArray(),

@@ -3,6 +3,7 @@ using Decide.Core.Analysis;
 using Decide.Core.Model;
 using Decide.Data;
 using Decide.Data.Entities;
+using Decide.Interchange;
 using Decide.Web.Features.Audit;
 using Decide.Web.Infrastructure;
 using Microsoft.EntityFrameworkCore;
@@ -119,7 +120,7 @@ public sealed class NumericValueService(
             ? Cell(r, names)
             : new ValueCell(b.Code, c.Id, null, null, null, null))).ToArray();
         return new ValuesView(
-            criteria.Select(c => new NumericCriterionView(c.Id, c.Name, c.Unit, c.Direction == Direction.Cost ? "cost" : "benefit")).ToArray(),
+            criteria.Select(c => new NumericCriterionView(c.Id, c.Name, c.Unit, FormatWords.Of(c.Direction))).ToArray(),
             bidders.Select(b => new BidderView(b.Code, b.Name)).ToArray(),
             cells,
             x.Membership.Has(PanelRole.PriceEvaluator) && x.Evaluation.Stage == EvaluationStage.Scoring);
