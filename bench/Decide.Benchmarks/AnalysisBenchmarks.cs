@@ -6,7 +6,7 @@ using Decide.Core.Model;
 namespace Decide.Benchmarks;
 
 /// <summary>
-/// The engine end to end (<see cref="DecisionEngine.Analyze"/>: validate, derive weights, aggregate, rank and build
+/// The engine end to end (<see cref="DecisionEngine.Analyse"/>: validate, derive weights, aggregate, rank and build
 /// the result) and the validator alone, on a typical and a large synthetic panel under both weighting methods.
 /// </summary>
 [MemoryDiagnoser]
@@ -38,7 +38,7 @@ public class AnalysisBenchmarks
 
     /// <summary>Validate, weigh, aggregate and rank.</summary>
     [Benchmark]
-    public AnalysisResult Analyze() => DecisionEngine.Analyze(_evaluation);
+    public AnalysisResult Analyse() => DecisionEngine.Analyse(_evaluation);
 
     /// <summary>The validator alone.</summary>
     [Benchmark]

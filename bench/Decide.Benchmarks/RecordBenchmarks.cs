@@ -55,7 +55,7 @@ public class RecordBenchmarks
     {
         var file = EvaluationFileReader.Read(json);
         var prepared = DecisionEngine.Prepare(file.Evaluation);
-        var analysis = prepared.Analyze();
+        var analysis = prepared.Analyse();
         var robustness = RobustnessAnalysis.Run(prepared, analysis, new RobustnessOptions(RobustnessOptions.DefaultDraws, RobustnessOptions.DefaultSeed, threads));
         return new RecordContent(
             file.Evaluation, analysis, robustness,

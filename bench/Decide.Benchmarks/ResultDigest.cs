@@ -26,14 +26,14 @@ public static class ResultDigest
                 // The geometric mean is refused on these (Chen) scales, whose lowest terms reach 0 (ADR 18).
                 foreach (var options in new[] { new AnalysisOptions(), new AnalysisOptions(AggregationRule.Mean, IdealPoints.Extreme) })
                 {
-                    var result = DecisionEngine.Analyze(evaluation with { Options = options });
+                    var result = DecisionEngine.Analyse(evaluation with { Options = options });
                     output.WriteLine($"{size.Name,-8} {weighting,-10} {options.Aggregation,-9} {options.Ideal,-7} analysis {Hash(result)}");
                 }
             }
 
             foreach (var weighting in new[] { WeightingMethod.Importance, WeightingMethod.Pairwise })
             {
-                var result = DecisionEngine.Analyze(Varied(SyntheticEvaluations.Create(size, weighting)));
+                var result = DecisionEngine.Analyse(Varied(SyntheticEvaluations.Create(size, weighting)));
                 output.WriteLine($"{size.Name,-8} {weighting,-10} varied            analysis {Hash(result)}");
             }
 

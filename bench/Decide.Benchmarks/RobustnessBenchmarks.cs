@@ -28,7 +28,7 @@ public class RobustnessBenchmarks
     {
         _acceptability = DecisionEngine.Prepare(SyntheticEvaluations.Create(PanelSize.Acceptability, WeightingMethod.Importance));
         _typical = DecisionEngine.Prepare(SyntheticEvaluations.Create(PanelSize.Typical, WeightingMethod.Importance));
-        _typicalResult = _typical.Analyze();
+        _typicalResult = _typical.Analyse();
     }
 
     /// <summary>10,000 draws, 20 × 15.</summary>

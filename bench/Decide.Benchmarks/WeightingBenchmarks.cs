@@ -66,5 +66,5 @@ public class WeightingBenchmarks
 
     /// <summary>CR, GCI, worst judgements and triads of one 9 × 9 matrix.</summary>
     [Benchmark]
-    public ConsistencyReport ConsistencyOfOne() => PairwiseConsistency.Analyze(_middles, _individual[0].Items);
+    public ConsistencyReport ConsistencyOfOne() => PairwiseConsistency.Analyse(_middles, _individual[0].Items);
 }

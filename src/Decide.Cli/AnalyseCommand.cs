@@ -2,6 +2,7 @@ using System.CommandLine;
 using System.CommandLine.Parsing;
 using System.Globalization;
 using System.Numerics;
+using Decide.Core;
 using Decide.Core.Analysis;
 using Decide.Core.Robustness;
 using Decide.Interchange;
@@ -89,9 +90,7 @@ public sealed class AnalyseCommand
     public int Execute(string file, AnalyseOutput output, RobustnessOptions? robustness) => CommandGuard.Run(_stderr, () =>
     {
         var input = CommandGuard.ReadEvaluation(file);
-        var prepared = DecisionEngine.Prepare(input.Evaluation);
-        var result = prepared.Analyze();
-        var checks = robustness is null ? null : RobustnessAnalysis.Run(prepared, result, robustness);
+        var (_, result, checks) = DecisionRun.Of(input.Evaluation, robustness);
         if (output == AnalyseOutput.Table)
         {
             TableRenderer.Render(input, result, checks, _stdout);

@@ -24,7 +24,7 @@ public static class PrintedFigures
         try
         {
             file = EvaluationFileReader.Read(record.Snapshot);
-            analysis = DecisionEngine.Analyze(file.Evaluation);
+            analysis = DecisionRun.Of(file.Evaluation).Analysis;
         }
         catch (InvalidEvaluationException ex)
         {

@@ -1,4 +1,5 @@
 using System.Text;
+using Decide.Core;
 using Decide.Core.Analysis;
 using Decide.Core.Robustness;
 using Decide.Interchange;
@@ -20,9 +21,8 @@ public static class RecordContentBuilder
     {
         ArgumentNullException.ThrowIfNull(file);
         var evaluation = file.Evaluation;
-        var prepared = DecisionEngine.Prepare(evaluation);
-        var analysis = prepared.Analyze();
-        var checks = RobustnessAnalysis.Run(prepared, analysis, robustness);
+        var run = DecisionRun.Of(evaluation, robustness);
+        var (analysis, checks) = (run.Analysis, run.Robustness!);
         var snapshot = Encoding.UTF8.GetBytes(EvaluationFileWriter.ToJson(file));
         var names = evaluation.Assessors.ToDictionary(a => a.Id, a => a.Name, StringComparer.Ordinal);
 

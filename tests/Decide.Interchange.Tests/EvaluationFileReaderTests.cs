@@ -176,7 +176,7 @@ public sealed class EvaluationFileReaderTests
     {
         var file = EvaluationFileReader.Read(Files.PairwiseText);
 
-        var result = Core.Analysis.DecisionEngine.Analyze(file.Evaluation);
+        var result = Core.Analysis.DecisionEngine.Analyse(file.Evaluation);
 
         Assert.Equal(3, result.Ranking.Count);
         Assert.Equal(["E1", "E2", "panel"], result.Consistency.Select(c => c.Assessor).Distinct().Order());

@@ -120,7 +120,7 @@ public sealed class HostileFileTests
 
             // "A file that reads without error can be analysed" (EvaluationFileReader's remarks), and written back.
             var file = File!;
-            var result = DecisionEngine.Analyze(file.Evaluation);
+            var result = DecisionEngine.Analyse(file.Evaluation);
             Assert.NotEmpty(ResultsWriter.ToJson(result, file.Evaluation));
             var again = EvaluationFileReader.Read(EvaluationFileWriter.ToJson(file));
             Assert.Equal(file.Evaluation.Criteria.Count, again.Evaluation.Criteria.Count);

@@ -166,7 +166,7 @@ public sealed class ModerationTests
 
         var file = EvaluationFileReader.Read(declined.Set("moderation", """{"B2": {"quality": {"term": "MG", "reason": "Agreed from the interview notes."}}}""").ToJsonString());
 
-        Assert.Equal(2, DecisionEngine.Analyze(file.Evaluation).Ranking.Count);
+        Assert.Equal(2, DecisionEngine.Analyse(file.Evaluation).Ranking.Count);
     }
 
     [Fact]
@@ -183,7 +183,7 @@ public sealed class ModerationTests
     public void The_results_name_the_moderated_term_of_a_moderated_cell_only()
     {
         var file = EvaluationFileReader.Read(WithModeration("MP").ToJsonString());
-        var json = JsonDocument.Parse(ResultsWriter.ToJson(DecisionEngine.Analyze(file.Evaluation), file.Evaluation)).RootElement;
+        var json = JsonDocument.Parse(ResultsWriter.ToJson(DecisionEngine.Analyse(file.Evaluation), file.Evaluation)).RootElement;
 
         var cells = json.GetProperty("matrix").EnumerateArray().ToArray();
         var cell = cells.Single(c => c.GetProperty("alternative").GetString() == "B1" && c.GetProperty("criterion").GetString() == "quality");
@@ -198,8 +198,8 @@ public sealed class ModerationTests
     public void Moderating_a_cell_down_changes_the_ranking_in_the_results()
     {
         // B1 leads the unmoderated example on quality (E1 G, E2 VG against B2's MG); moderated to VP it must fall back.
-        var plain = DecisionEngine.Analyze(EvaluationFileReader.Read(Files.MinimalText).Evaluation);
-        var moderated = DecisionEngine.Analyze(EvaluationFileReader.Read(WithModeration("VP").ToJsonString()).Evaluation);
+        var plain = DecisionEngine.Analyse(EvaluationFileReader.Read(Files.MinimalText).Evaluation);
+        var moderated = DecisionEngine.Analyse(EvaluationFileReader.Read(WithModeration("VP").ToJsonString()).Evaluation);
 
         var before = plain.Ranking.Single(r => r.Alternative == "B1").Closeness;
         var after = moderated.Ranking.Single(r => r.Alternative == "B1").Closeness;
@@ -211,7 +211,7 @@ public sealed class ModerationTests
     {
         var file = EvaluationFileReader.Read(WithModeration().ToJsonString());
         var prepared = DecisionEngine.Prepare(file.Evaluation);
-        var result = prepared.Analyze();
+        var result = prepared.Analyse();
         var robustness = RobustnessAnalysis.Run(prepared, result, new RobustnessOptions(Draws: 200, Seed: 1));
 
         var plain = ResultsWriter.ToJson(result, file.Evaluation);
@@ -228,7 +228,7 @@ public sealed class ModerationTests
     public void The_results_schema_rejects_a_moderated_term_that_is_not_a_string()
     {
         var file = EvaluationFileReader.Read(WithModeration().ToJsonString());
-        var results = JsonNode.Parse(ResultsWriter.ToJson(DecisionEngine.Analyze(file.Evaluation), file.Evaluation))!;
+        var results = JsonNode.Parse(ResultsWriter.ToJson(DecisionEngine.Analyse(file.Evaluation), file.Evaluation))!;
         results["matrix"]![0]!["moderated"] = 5;
 
         Assert.False(Schemas.IsValid(Schemas.Results, results.ToJsonString()));

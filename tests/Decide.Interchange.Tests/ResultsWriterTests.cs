@@ -10,7 +10,7 @@ public sealed class ResultsWriterTests
     private static (EvaluationFile File, AnalysisResult Result, JsonElement Json) Analyse(string json)
     {
         var file = EvaluationFileReader.Read(json);
-        var result = DecisionEngine.Analyze(file.Evaluation);
+        var result = DecisionEngine.Analyse(file.Evaluation);
         var text = ResultsWriter.ToJson(result, file.Evaluation);
         return (file, result, JsonDocument.Parse(text).RootElement);
     }
@@ -89,7 +89,7 @@ public sealed class ResultsWriterTests
     public void Member_names_are_camel_case()
     {
         var file = EvaluationFileReader.Read(Files.MinimalText);
-        var text = ResultsWriter.ToJson(DecisionEngine.Analyze(file.Evaluation), file.Evaluation);
+        var text = ResultsWriter.ToJson(DecisionEngine.Analyse(file.Evaluation), file.Evaluation);
 
         Assert.Contains("\"dPlus\"", text);
         Assert.DoesNotContain("\"DPlus\"", text);
@@ -120,7 +120,7 @@ public sealed class ResultsWriterTests
     public void A_later_section_can_be_added_to_the_document_without_touching_the_rest()
     {
         var file = EvaluationFileReader.Read(Files.MinimalText);
-        var document = ResultsWriter.CreateDocument(DecisionEngine.Analyze(file.Evaluation), file.Evaluation);
+        var document = ResultsWriter.CreateDocument(DecisionEngine.Analyse(file.Evaluation), file.Evaluation);
 
         var retitled = ResultsWriter.ToJson(document with { Title = "Renamed" });
 

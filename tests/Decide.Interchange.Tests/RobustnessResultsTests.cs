@@ -21,7 +21,7 @@ public sealed class RobustnessResultsTests
     {
         var file = EvaluationFileReader.Read(json);
         var prepared = DecisionEngine.Prepare(file.Evaluation);
-        var result = prepared.Analyze();
+        var result = prepared.Analyse();
         var robustness = RobustnessAnalysis.Run(prepared, result, new RobustnessOptions(draws, seed, threads));
         return new Analysed(file, result, robustness, ResultsWriter.ToJson(result, file.Evaluation, robustness));
     }
@@ -343,7 +343,7 @@ public sealed class RobustnessResultsTests
     public void Without_robustness_the_three_sections_are_left_out()
     {
         var file = EvaluationFileReader.Read(Files.MinimalText);
-        var json = JsonDocument.Parse(ResultsWriter.ToJson(DecisionEngine.Analyze(file.Evaluation), file.Evaluation)).RootElement;
+        var json = JsonDocument.Parse(ResultsWriter.ToJson(DecisionEngine.Analyse(file.Evaluation), file.Evaluation)).RootElement;
 
         Assert.False(json.TryGetProperty("sensitivity", out _));
         Assert.False(json.TryGetProperty("agreement", out _));

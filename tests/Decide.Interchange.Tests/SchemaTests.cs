@@ -49,7 +49,7 @@ public sealed class SchemaTests
     {
         var read = EvaluationFileReader.ReadFile(RepositoryFiles.PathOf(file));
 
-        var results = ResultsWriter.ToJson(DecisionEngine.Analyze(read.Evaluation), read.Evaluation);
+        var results = ResultsWriter.ToJson(DecisionEngine.Analyse(read.Evaluation), read.Evaluation);
 
         AssertValid(Schemas.Results, results);
     }
@@ -116,7 +116,7 @@ public sealed class SchemaTests
     private static string WithRobustness(EvaluationFile read)
     {
         var prepared = DecisionEngine.Prepare(read.Evaluation);
-        var result = prepared.Analyze();
+        var result = prepared.Analyse();
         return ResultsWriter.ToJson(result, read.Evaluation, RobustnessAnalysis.Run(prepared, result, new RobustnessOptions(Draws: 300, Seed: 1)));
     }
 
@@ -125,7 +125,7 @@ public sealed class SchemaTests
     {
         var read = EvaluationFileReader.Read(Files.PairwiseText);
 
-        AssertValid(Schemas.Results, ResultsWriter.ToJson(DecisionEngine.Analyze(read.Evaluation), read.Evaluation));
+        AssertValid(Schemas.Results, ResultsWriter.ToJson(DecisionEngine.Analyse(read.Evaluation), read.Evaluation));
     }
 
     [Fact]
@@ -155,7 +155,7 @@ public sealed class SchemaTests
     public void The_results_schema_rejects_a_document_without_a_ranking()
     {
         var read = EvaluationFileReader.Read(Files.MinimalText);
-        var results = JsonNode.Parse(ResultsWriter.ToJson(DecisionEngine.Analyze(read.Evaluation), read.Evaluation))!.AsObject();
+        var results = JsonNode.Parse(ResultsWriter.ToJson(DecisionEngine.Analyse(read.Evaluation), read.Evaluation))!.AsObject();
         results.Remove("ranking");
 
         Assert.False(Schemas.Results.Evaluate(JsonDocument.Parse(results.ToJsonString()).RootElement).IsValid);

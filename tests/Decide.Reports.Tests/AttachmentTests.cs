@@ -20,7 +20,7 @@ public sealed class AttachmentTests
     {
         var (snapshot, _) = RecordAttachment.Read(SampleRecords.SignedBusStop);
         var file = EvaluationFileReader.Read(snapshot);
-        var again = DecisionEngine.Analyze(file.Evaluation);
+        var again = DecisionEngine.Analyse(file.Evaluation);
         var text = PdfText.Of(SampleRecords.SignedBusStop).Squeezed;
 
         var at = 0;

@@ -12,7 +12,7 @@ public sealed class RecordFiguresTests
     {
         var content = SampleRecords.BusStop;
         // An independent run of the engine on the same evaluation: the record must print these numbers.
-        var engine = DecisionEngine.Analyze(content.Evaluation);
+        var engine = DecisionEngine.Analyse(content.Evaluation);
         var names = content.Evaluation.Alternatives.ToDictionary(a => a.Id, a => a.Name);
         Assert.NotEmpty(engine.Ranking);
         foreach (var r in engine.Ranking)
@@ -29,7 +29,7 @@ public sealed class RecordFiguresTests
     public void The_ranking_table_lists_the_alternatives_in_the_engines_order()
     {
         var content = SampleRecords.BusStop;
-        var engine = DecisionEngine.Analyze(content.Evaluation);
+        var engine = DecisionEngine.Analyse(content.Evaluation);
         var names = content.Evaluation.Alternatives.ToDictionary(a => a.Id, a => a.Name);
         var text = Text.Squeezed;
         var table = text.IndexOf(PdfText.Squeeze("Rank Alternative Closeness CC"), StringComparison.Ordinal);

@@ -38,7 +38,7 @@ internal static class SampleRecords
     {
         var evaluation = file.Evaluation;
         var prepared = DecisionEngine.Prepare(evaluation);
-        var analysis = prepared.Analyze();
+        var analysis = prepared.Analyse();
         var robustness = RobustnessAnalysis.Run(prepared, analysis, new RobustnessOptions(draws, 7, 2));
         var snapshot = Encoding.UTF8.GetBytes(EvaluationFileWriter.ToJson(file));
         var first = evaluation.Assessors[0];

@@ -36,7 +36,7 @@ public sealed class HostileNamesTests : MudComponentTest
             Assessors = [.. e.Assessors.Select((a, i) => a with { Name = Names[(i + 5) % Names.Length] })],
         };
         var prepared = DecisionEngine.Prepare(e);
-        var analysis = prepared.Analyze();
+        var analysis = prepared.Analyse();
         return (e, analysis, RobustnessAnalysis.Run(prepared, analysis, new RobustnessOptions(200, 20261201, 1)));
     });
 

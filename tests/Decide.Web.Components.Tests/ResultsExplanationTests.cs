@@ -14,7 +14,7 @@ public sealed class ResultsExplanationTests : MudComponentTest
     {
         var e = EvaluationFileReader.ReadFile(Path.Combine(Root(), "samples", "bus-stop-displays-importance.json")).Evaluation;
         var prepared = DecisionEngine.Prepare(e);
-        var analysis = prepared.Analyze();
+        var analysis = prepared.Analyse();
         return (ResultNames.Of(e), analysis, RobustnessAnalysis.Run(prepared, analysis, new RobustnessOptions(0, 1, 1)));
     });
 

@@ -168,7 +168,7 @@ public sealed class JourneyTests(BrowserSite site) : IClassFixture<BrowserSite>
     {
         var file = EvaluationFileReader.ReadFile(Path.Combine(AppContext.BaseDirectory, "samples", DemoSeeder.DemoFile));
         var prepared = DecisionEngine.Prepare(file.Evaluation);
-        var analysis = prepared.Analyze();
+        var analysis = prepared.Analyse();
         var robustness = RobustnessAnalysis.Run(prepared, analysis, new RobustnessOptions());
         return (analysis, robustness, file.Evaluation.Alternatives.ToDictionary(a => a.Id, a => a.Name));
     }

@@ -19,5 +19,5 @@ public static class DecisionEngine
 
     /// <summary>Analyses an evaluation: weights, consistency, decision matrix and ranking.</summary>
     /// <exception cref="InvalidEvaluationException">The evaluation has problems; every one is listed with its place.</exception>
-    public static AnalysisResult Analyze(Evaluation evaluation) => Prepare(evaluation).Analyze();
+    public static AnalysisResult Analyse(Evaluation evaluation) => Prepare(evaluation).Analyse();
 }

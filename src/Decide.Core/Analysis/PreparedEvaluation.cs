@@ -176,7 +176,7 @@ public sealed class PreparedEvaluation
     }
 
     /// <summary>Runs fuzzy TOPSIS on the prepared matrix and weights and builds the full result.</summary>
-    public AnalysisResult Analyze()
+    public AnalysisResult Analyse()
     {
         int n = Alternatives.Count, m = Criteria.Count;
         var weighted = new Tfn[n * m];

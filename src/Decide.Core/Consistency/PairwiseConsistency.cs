@@ -20,7 +20,7 @@ public static class PairwiseConsistency
     /// <param name="matrix">aᵢⱼ, row-major, n × n; aᵢᵢ = 1, aⱼᵢ = 1/aᵢⱼ.</param>
     /// <param name="items">Item ids in row order, for naming judgements.</param>
     /// <exception cref="ArgumentException">The matrix is not n × n, not positive, or n exceeds the RI table.</exception>
-    public static ConsistencyReport Analyze(ReadOnlySpan<double> matrix, IReadOnlyList<string> items)
+    public static ConsistencyReport Analyse(ReadOnlySpan<double> matrix, IReadOnlyList<string> items)
     {
         var n = items.Count;
         if (n < 1 || matrix.Length != n * n)

@@ -31,7 +31,7 @@ public static class LeaveOneOut
             var without = Without(source, assessor.Id);
             try
             {
-                var result = DecisionEngine.Analyze(without);
+                var result = DecisionEngine.Analyse(without);
                 var ranking = result.Ranking.Select(r => r.Alternative).ToArray();
                 results.Add(new LeaveOneOutResult(assessor.Id, ranking.FirstOrDefault(), ranking, !winners.SetEquals(Winners(result))));
             }

@@ -28,7 +28,7 @@ public static class MethodCrossCheck
 
     /// <summary>Three comparisons: other aggregation, other ideal points, weighted total.</summary>
     public static IReadOnlyList<MethodComparison> Run(PreparedEvaluation prepared, AnalysisResult baseResult) =>
-        Run(prepared, baseResult, DecisionEngine.Analyze);
+        Run(prepared, baseResult, DecisionEngine.Analyse);
 
     /// <summary>As <see cref="Run(PreparedEvaluation, AnalysisResult)"/>, analysing each TOPSIS variant with <paramref name="analyze"/>.</summary>
     internal static IReadOnlyList<MethodComparison> Run(PreparedEvaluation prepared, AnalysisResult baseResult, Func<Evaluation, AnalysisResult> analyze)

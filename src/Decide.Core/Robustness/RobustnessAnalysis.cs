@@ -11,7 +11,7 @@ public static class RobustnessAnalysis
 {
     /// <summary>Runs everything.</summary>
     /// <param name="prepared">From <see cref="DecisionEngine.Prepare"/>.</param>
-    /// <param name="baseResult">From <see cref="PreparedEvaluation.Analyze"/>.</param>
+    /// <param name="baseResult">From <see cref="PreparedEvaluation.Analyse"/>.</param>
     /// <param name="options">Draws, seed, threads. Zero draws skips rank acceptability (its result then has no entries).</param>
     public static RobustnessResult Run(PreparedEvaluation prepared, AnalysisResult baseResult, RobustnessOptions? options = null)
     {

@@ -177,5 +177,5 @@ public static class CriterionWeights
 
     /// <summary>Consistency and Buckley weights of one matrix.</summary>
     public static MatrixConsistency Report(string assessor, string? group, FuzzyPairwiseMatrix matrix) =>
-        new(assessor, group, matrix.Items, PairwiseConsistency.Analyze(matrix.Middles(), matrix.Items), BuckleyWeights.Compute(matrix));
+        new(assessor, group, matrix.Items, PairwiseConsistency.Analyse(matrix.Middles(), matrix.Items), BuckleyWeights.Compute(matrix));
 }

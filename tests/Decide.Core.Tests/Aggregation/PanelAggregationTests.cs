@@ -17,7 +17,7 @@ public sealed class PanelAggregationTests
             Ratings = [.. ThreeAssessors().Ratings.Where(r => !(r.Assessor == "D2" && r.Alternative == "S1" && r.Criterion == "QUALITY")),
                 new Rating("D2", "S1", "QUALITY", null, Declined: "recused: former employee of S1")],
         };
-        var cell = DecisionEngine.Analyze(evaluation).Matrix.Single(c => c.Alternative == "S1" && c.Criterion == "QUALITY");
+        var cell = DecisionEngine.Analyse(evaluation).Matrix.Single(c => c.Alternative == "S1" && c.Criterion == "QUALITY");
 
         var good = new Tfn(7, 9, 10);
         var fair = new Tfn(3, 5, 7);
@@ -31,7 +31,7 @@ public sealed class PanelAggregationTests
     [Fact]
     public void A_cell_all_rated_alike_keeps_that_term()
     {
-        var cell = DecisionEngine.Analyze(ThreeAssessors()).Matrix.Single(c => c.Alternative == "S2" && c.Criterion == "STAFF");
+        var cell = DecisionEngine.Analyse(ThreeAssessors()).Matrix.Single(c => c.Alternative == "S2" && c.Criterion == "STAFF");
         Assert.Equal(new Tfn(5, 7, 9), cell.Aggregated); // MG from all three
         Assert.Equal(3, cell.Raters);
     }
@@ -39,7 +39,7 @@ public sealed class PanelAggregationTests
     [Fact]
     public void A_numeric_cell_is_its_crisp_value()
     {
-        var cell = DecisionEngine.Analyze(ThreeAssessors()).Matrix.Single(c => c.Alternative == "S2" && c.Criterion == "PRICE");
+        var cell = DecisionEngine.Analyse(ThreeAssessors()).Matrix.Single(c => c.Alternative == "S2" && c.Criterion == "PRICE");
         Assert.Equal(Tfn.Crisp(38_500), cell.Aggregated);
         Assert.Equal(0, cell.Raters);
     }

@@ -16,7 +16,7 @@ public sealed class ExplanationTests
     [InlineData("A1", "A3")]
     public void Advantages_add_up_to_the_difference_in_closeness(string a, string b)
     {
-        var result = DecisionEngine.Analyze(Chen2000WorkedExample.Build());
+        var result = DecisionEngine.Analyse(Chen2000WorkedExample.Build());
         var first = result.Ranking.Single(r => r.Alternative == a);
         var second = result.Ranking.Single(r => r.Alternative == b);
 
@@ -42,7 +42,7 @@ public sealed class ExplanationTests
         //   C2: Δ⁻ = 0.3496039,  Δ⁺ = −0.3434169 → (0.3496039·0.9488745 + 0.3434169·3.2449966)/8.7935246 = 0.1644525
         var evaluation = RobustnessFixtures.Uniform([["VG", "F"], ["G", "G"]], ["10", "10"], assessors: 1,
             importanceScale: RobustnessFixtures.CrispImportance);
-        var result = DecisionEngine.Analyze(evaluation);
+        var result = DecisionEngine.Analyse(evaluation);
         Assert.Equal(0.8274622 - 0.7190291, result.Ranking[0].Closeness - result.Ranking[1].Closeness, 6);
 
         var terms = Explanation.WhyLeads(result, "A2", "A1").ToDictionary(t => t.Criterion, t => t.Advantage);
@@ -53,7 +53,7 @@ public sealed class ExplanationTests
     [Fact]
     public void Advantages_are_listed_largest_in_size_first()
     {
-        var result = DecisionEngine.Analyze(Chen2000WorkedExample.Build());
+        var result = DecisionEngine.Analyse(Chen2000WorkedExample.Build());
         var forward = Explanation.WhyLeads(result, "A2", "A1");
         Assert.Equal(forward.OrderByDescending(t => Math.Abs(t.Advantage)).Select(t => t.Criterion), forward.Select(t => t.Criterion));
 
@@ -65,7 +65,7 @@ public sealed class ExplanationTests
     [Property(MaxTest = 300)]
     public void On_any_panel_the_terms_add_up_to_the_closeness_difference_and_change_sign_when_swapped(GeneratedEvaluation generated)
     {
-        var result = DecisionEngine.Analyze(generated.Evaluation);
+        var result = DecisionEngine.Analyse(generated.Evaluation);
         var m = result.Weights.Count;
         foreach (var a in result.Ranking)
         {
@@ -96,7 +96,7 @@ public sealed class ExplanationTests
                 .. e.Values.Where(v => v.Alternative == a && v.Criterion == criterion).Select(v => v with { Alternative = b })],
         };
 
-        var result = DecisionEngine.Analyze(alike);
+        var result = DecisionEngine.Analyse(alike);
         var terms = Explanation.WhyLeads(result, a, b);
         Assert.Equal(0.0, terms.Single(t => t.Criterion == criterion).Advantage);
         Assert.Equal(0.0, Explanation.WhyLeads(result, b, a).Single(t => t.Criterion == criterion).Advantage);
@@ -108,7 +108,7 @@ public sealed class ExplanationTests
         // Every cell the same crisp value: the extreme ideal points coincide, d⁺ = d⁻ = 0, every closeness is 0.5.
         var evaluation = RobustnessFixtures.Uniform([["5", "5"], ["5", "5"]], ["6", "4"],
             rating: RobustnessFixtures.CrispRating, importanceScale: RobustnessFixtures.CrispImportance, ideal: IdealPoints.Extreme);
-        var result = DecisionEngine.Analyze(evaluation);
+        var result = DecisionEngine.Analyse(evaluation);
         Assert.All(result.Ranking, r => Assert.Equal(0.5, r.Closeness));
         Assert.All(Explanation.WhyLeads(result, "A1", "A2"), t => Assert.Equal(0.0, t.Advantage));
     }
@@ -116,7 +116,7 @@ public sealed class ExplanationTests
     [Fact]
     public void An_alternative_that_is_not_ranked_is_refused()
     {
-        var result = DecisionEngine.Analyze(Chen2000WorkedExample.Build());
+        var result = DecisionEngine.Analyse(Chen2000WorkedExample.Build());
         Assert.Throws<ArgumentException>(() => Explanation.WhyLeads(result, "A9", "A1"));
         Assert.Throws<ArgumentException>(() => Explanation.WhyLeads(result, "A1", "A9"));
     }

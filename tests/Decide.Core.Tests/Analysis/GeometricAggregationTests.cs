@@ -66,8 +66,8 @@ public sealed class GeometricAggregationTests
             Importance = e.Importance.Select(r => r with { Term = MapImportance(r.Term) }).ToArray(),
         };
 
-        var mean = DecisionEngine.Analyze(positive);
-        var geometric = DecisionEngine.Analyze(Geometric(positive));
+        var mean = DecisionEngine.Analyse(positive);
+        var geometric = DecisionEngine.Analyse(Geometric(positive));
         Assert.NotEqual(mean.Ranking.Select(r => r.Closeness), geometric.Ranking.Select(r => r.Closeness));
     }
 }

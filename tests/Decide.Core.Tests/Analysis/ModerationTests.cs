@@ -12,8 +12,8 @@ public sealed class ModerationTests
     {
         var original = Chen2000WorkedExample.Build();
         var moderated = original with { Moderated = [new ModeratedRating("A1", "C5", "G", "panel agreed the references show steady self-confidence", ["D1", "D2"])] };
-        var before = DecisionEngine.Analyze(original).Matrix;
-        var after = DecisionEngine.Analyze(moderated).Matrix;
+        var before = DecisionEngine.Analyse(original).Matrix;
+        var after = DecisionEngine.Analyse(moderated).Matrix;
 
         var cell = after.Single(c => c.Alternative == "A1" && c.Criterion == "C5");
         Assert.Equal(BuiltInScales.ChenRating7[5].Value, cell.Aggregated); // G = (7, 9, 10)
@@ -30,9 +30,9 @@ public sealed class ModerationTests
         {
             Ratings = evaluation.Ratings.Select(r => r.Alternative == "A3" && r.Criterion == "C1" ? r with { Term = null, Declined = "recused" } : r).ToArray(),
         };
-        Assert.Throws<InvalidEvaluationException>(() => DecisionEngine.Analyze(evaluation));
+        Assert.Throws<InvalidEvaluationException>(() => DecisionEngine.Analyse(evaluation));
         var agreed = evaluation with { Moderated = [new ModeratedRating("A3", "C1", "G", "consensus from the interview notes")] };
-        Assert.Equal(3, DecisionEngine.Analyze(agreed).Ranking.Count);
+        Assert.Equal(3, DecisionEngine.Analyse(agreed).Ranking.Count);
     }
 
     [Theory]

@@ -92,7 +92,7 @@ public sealed class PairwiseValidationTests
     public void Ten_criteria_in_one_matrix_are_accepted_and_use_RI_1_49(bool grouped)
     {
         // RI(10) = 1.49, Saaty (1980) [recalled]: the largest order with a published random index.
-        var result = Decide.Core.Analysis.DecisionEngine.Analyze(Compared(10, grouped));
+        var result = Decide.Core.Analysis.DecisionEngine.Analyse(Compared(10, grouped));
         var ten = result.Consistency.Where(c => c.Items.Count == 10).ToArray();
         Assert.NotEmpty(ten); // the assessor's matrix and the panel's
         Assert.All(ten, c => Assert.Equal(1.49, c.Report.RandomIndex));

@@ -17,7 +17,7 @@ public sealed class SeveralProblemsTests
             Gates = sample.Gates.Where(g => g.Alternative != "S3").ToArray(),
         };
 
-        var exception = Assert.Throws<InvalidEvaluationException>(() => Core.Analysis.DecisionEngine.Analyze(evaluation));
+        var exception = Assert.Throws<InvalidEvaluationException>(() => Core.Analysis.DecisionEngine.Analyse(evaluation));
         var errors = exception.Errors;
         HasError(errors, "$.ratings.D2.S2.STAFF", "unknown term \"Superb\"");
         HasError(errors, "$.values.S1.PRICE", "finite number");

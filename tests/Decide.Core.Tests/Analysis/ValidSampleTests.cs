@@ -21,7 +21,7 @@ public sealed class ValidSampleTests
     [Fact]
     public void Sample_is_analysed_and_ranks_every_supplier()
     {
-        var result = DecisionEngine.Analyze(SampleEvaluation.WithImportance());
+        var result = DecisionEngine.Analyse(SampleEvaluation.WithImportance());
         Assert.Equal(["S1", "S2", "S3"], result.Ranking.Select(r => r.Alternative).Order());
         Assert.All(result.Ranking, r => Assert.InRange(r.Closeness, 0, 1));
     }

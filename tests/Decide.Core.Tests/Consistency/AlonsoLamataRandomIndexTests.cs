@@ -26,7 +26,7 @@ public sealed class AlonsoLamataRandomIndexTests
                 foreach (var a23 in values)
                 {
                     double[] a = [1, a12, a13, 1 / a12, 1, a23, 1 / a13, 1 / a23, 1];
-                    sum += PairwiseConsistency.Analyze(a, items).ConsistencyIndex;
+                    sum += PairwiseConsistency.Analyse(a, items).ConsistencyIndex;
                     count++;
                 }
             }

@@ -11,7 +11,7 @@ public sealed class ConsistentMatrixTests
     public void A_consistent_matrix_has_ratio_zero_and_returns_its_weights(PositiveWeights weights)
     {
         var n = weights.Values.Length;
-        var report = PairwiseConsistency.Analyze(ReciprocalMatrices.Consistent(weights.Values), ReciprocalMatrices.Items(n));
+        var report = PairwiseConsistency.Analyse(ReciprocalMatrices.Consistent(weights.Values), ReciprocalMatrices.Items(n));
 
         Assert.InRange(report.Ratio, 0, 1e-12);
         Assert.InRange(report.ConsistencyIndex, 0, 1e-12);
@@ -30,7 +30,7 @@ public sealed class ConsistentMatrixTests
     [Fact]
     public void A_single_item_is_consistent()
     {
-        var report = PairwiseConsistency.Analyze([1], ["A"]);
+        var report = PairwiseConsistency.Analyse([1], ["A"]);
         Assert.True(report.Acceptable);
         Assert.Equal(0, report.Ratio);
         Assert.Equal([1.0], report.Eigenvector);
@@ -42,7 +42,7 @@ public sealed class ConsistentMatrixTests
     [InlineData(1)]
     public void Two_items_are_always_consistent(double a12)
     {
-        var report = PairwiseConsistency.Analyze([1, a12, 1 / a12, 1], ["A", "B"]);
+        var report = PairwiseConsistency.Analyse([1, a12, 1 / a12, 1], ["A", "B"]);
         Assert.True(report.Acceptable);
         Assert.True(report.GciAcceptable);
         Assert.Equal(0, report.Ratio);
@@ -53,8 +53,8 @@ public sealed class ConsistentMatrixTests
     [Fact]
     public void A_matrix_that_is_not_square_or_not_positive_is_refused()
     {
-        Assert.Throws<ArgumentException>(() => PairwiseConsistency.Analyze([1, 2, 0.5], ["A", "B"]));
-        Assert.Throws<ArgumentException>(() => PairwiseConsistency.Analyze([1, 0, 0, 1], ["A", "B"]));
-        Assert.Throws<ArgumentException>(() => PairwiseConsistency.Analyze([1, double.NaN, 1, 1], ["A", "B"]));
+        Assert.Throws<ArgumentException>(() => PairwiseConsistency.Analyse([1, 2, 0.5], ["A", "B"]));
+        Assert.Throws<ArgumentException>(() => PairwiseConsistency.Analyse([1, 0, 0, 1], ["A", "B"]));
+        Assert.Throws<ArgumentException>(() => PairwiseConsistency.Analyse([1, double.NaN, 1, 1], ["A", "B"]));
     }
 }

@@ -74,7 +74,7 @@ public sealed class EigenvalueCrossCheckTests
 
     private static ConsistencyReport AssertAgreesWithMathNet(double[] a, int n)
     {
-        var report = PairwiseConsistency.Analyze(a, ReciprocalMatrices.Items(n));
+        var report = PairwiseConsistency.Analyse(a, ReciprocalMatrices.Items(n));
 
         var evd = Matrix<double>.Build.DenseOfArray(ReciprocalMatrices.ToArray2D(a, n)).Evd();
         var eigenvalues = evd.EigenValues;

@@ -15,7 +15,7 @@ public sealed class IntransitiveTriadTests
             1.0 / 3, 1, 3,
             3, 1.0 / 3, 1,
         ];
-        var report = PairwiseConsistency.Analyze(a, ["A", "B", "C"]);
+        var report = PairwiseConsistency.Analyse(a, ["A", "B", "C"]);
         var triad = Assert.Single(report.IntransitiveTriads);
         Assert.Equal(["A", "B", "C"], triad);
     }
@@ -30,7 +30,7 @@ public sealed class IntransitiveTriadTests
             2, 1, 1.0 / 2,
             1.0 / 2, 2, 1,
         ];
-        var triad = Assert.Single(PairwiseConsistency.Analyze(a, ["A", "B", "C"]).IntransitiveTriads);
+        var triad = Assert.Single(PairwiseConsistency.Analyse(a, ["A", "B", "C"]).IntransitiveTriads);
         Assert.Equal(["A", "C", "B"], triad);
     }
 
@@ -66,7 +66,7 @@ public sealed class IntransitiveTriadTests
             1.0 / 2, 1, 2,
             1.0 / 9, 1.0 / 2, 1,
         ];
-        Assert.Empty(PairwiseConsistency.Analyze(a, ["A", "B", "C"]).IntransitiveTriads);
+        Assert.Empty(PairwiseConsistency.Analyse(a, ["A", "B", "C"]).IntransitiveTriads);
     }
 
     [Fact]

@@ -43,7 +43,7 @@ public sealed class RandomIndexTests
     public void A_matrix_of_eleven_items_gets_no_consistency_ratio()
     {
         Assert.Throws<ArgumentOutOfRangeException>(
-            () => PairwiseConsistency.Analyze(ReciprocalMatrices.RandomSaaty(11, new Random(11)), ReciprocalMatrices.Items(11)));
+            () => PairwiseConsistency.Analyse(ReciprocalMatrices.RandomSaaty(11, new Random(11)), ReciprocalMatrices.Items(11)));
     }
 
     [Theory]
@@ -71,7 +71,7 @@ public sealed class RandomIndexTests
     [Fact]
     public void Every_report_records_the_table_and_thresholds_used()
     {
-        var report = PairwiseConsistency.Analyze(ReciprocalMatrices.RandomSaaty(5, new Random(5)), ReciprocalMatrices.Items(5));
+        var report = PairwiseConsistency.Analyse(ReciprocalMatrices.RandomSaaty(5, new Random(5)), ReciprocalMatrices.Items(5));
         Assert.Equal(RandomIndex.TableName, report.RandomIndexTable);
         Assert.Equal("Saaty (1980), n = 3–10", report.RandomIndexTable);
         Assert.Equal(1.12, report.RandomIndex);

@@ -16,7 +16,7 @@ public sealed class ThreeByThreeClosedFormTests
     [InlineData(1.0 / 5, 7, 1.0 / 2)]
     public void Lambda_max_and_gci_match_the_closed_form(double a12, double a23, double a13)
     {
-        var report = PairwiseConsistency.Analyze(Matrix(a12, a23, a13), ["A", "B", "C"]);
+        var report = PairwiseConsistency.Analyse(Matrix(a12, a23, a13), ["A", "B", "C"]);
         var c = a12 * a23 / a13;
         var lambda = 1 + Math.Cbrt(c) + (1 / Math.Cbrt(c));
         Assert.Equal(lambda, report.LambdaMax, 1e-10);
@@ -29,7 +29,7 @@ public sealed class ThreeByThreeClosedFormTests
     [InlineData(2.8, false)] // GCI = (ln 2.8)²/3 ≈ 0.353 > 0.31
     public void Gci_is_judged_against_its_threshold(double c, bool acceptable)
     {
-        var report = PairwiseConsistency.Analyze(Matrix(c, 1, 1), ["A", "B", "C"]);
+        var report = PairwiseConsistency.Analyse(Matrix(c, 1, 1), ["A", "B", "C"]);
         Assert.Equal(acceptable, report.GciAcceptable);
         Assert.Equal(0.31, report.GciThreshold);
     }
@@ -38,8 +38,8 @@ public sealed class ThreeByThreeClosedFormTests
     public void Ratio_is_judged_against_the_stricter_threshold_for_three_items()
     {
         // c = 2: CR = (2^⅓ + 2^−⅓ − 2)/2/0.58 ≈ 0.046 ≤ 0.05. c = 2.5: CR ≈ 0.081 > 0.05, yet ≤ 0.10, the general threshold.
-        Assert.True(PairwiseConsistency.Analyze(Matrix(2, 1, 1), ["A", "B", "C"]).Acceptable);
-        var report = PairwiseConsistency.Analyze(Matrix(2.5, 1, 1), ["A", "B", "C"]);
+        Assert.True(PairwiseConsistency.Analyse(Matrix(2, 1, 1), ["A", "B", "C"]).Acceptable);
+        var report = PairwiseConsistency.Analyse(Matrix(2.5, 1, 1), ["A", "B", "C"]);
         Assert.InRange(report.Ratio, 0.05, 0.10);
         Assert.False(report.Acceptable);
     }

@@ -12,7 +12,7 @@ public sealed class WorstJudgementTests
         var a = ReciprocalMatrices.Consistent([0.4, 0.3, 0.2, 0.1]);
         a[2] = 8;
         a[8] = 1.0 / 8;
-        var report = PairwiseConsistency.Analyze(a, ReciprocalMatrices.Items(4));
+        var report = PairwiseConsistency.Analyse(a, ReciprocalMatrices.Items(4));
 
         Assert.False(report.Acceptable);
         Assert.InRange(report.WorstJudgements.Count, 1, 3);
@@ -33,7 +33,7 @@ public sealed class WorstJudgementTests
         var a = ReciprocalMatrices.Consistent([8, 7, 6, 5, 4, 3, 2, 1]);
         a[2] = 36;
         a[16] = 1.0 / 36;
-        var report = PairwiseConsistency.Analyze(a, ReciprocalMatrices.Items(8));
+        var report = PairwiseConsistency.Analyse(a, ReciprocalMatrices.Items(8));
 
         Assert.False(report.Acceptable && report.GciAcceptable);
         var worst = report.WorstJudgements[0];
@@ -49,7 +49,7 @@ public sealed class WorstJudgementTests
         var a = ReciprocalMatrices.Consistent([0.4, 0.3, 0.2, 0.1]);
         a[2] = 2.5;
         a[8] = 1 / 2.5;
-        var report = PairwiseConsistency.Analyze(a, ReciprocalMatrices.Items(4));
+        var report = PairwiseConsistency.Analyse(a, ReciprocalMatrices.Items(4));
         Assert.True(report.Acceptable && report.GciAcceptable);
         Assert.Empty(report.WorstJudgements);
     }
@@ -58,7 +58,7 @@ public sealed class WorstJudgementTests
     public void Worst_judgements_can_be_asked_for_directly_and_are_capped()
     {
         var a = ReciprocalMatrices.RandomSaaty(6, new Random(6));
-        var report = PairwiseConsistency.Analyze(a, ReciprocalMatrices.Items(6));
+        var report = PairwiseConsistency.Analyse(a, ReciprocalMatrices.Items(6));
         var all = PairwiseConsistency.WorstJudgements(a, ReciprocalMatrices.Items(6), 100);
         Assert.Equal(15, all.Count); // every pair i < j once
         Assert.Equal(all.OrderByDescending(j => j.Deviation).Select(j => (j.Row, j.Col)), all.Select(j => (j.Row, j.Col)));

@@ -10,7 +10,7 @@ public sealed class ClosenessPropertyTests
     [Property]
     public void Closeness_lies_between_zero_and_one(GeneratedEvaluation generated)
     {
-        var result = DecisionEngine.Analyze(generated.Evaluation);
+        var result = DecisionEngine.Analyse(generated.Evaluation);
         Assert.Equal(generated.Evaluation.Alternatives.Count, result.Ranking.Count);
         foreach (var r in result.Ranking)
         {
@@ -22,7 +22,7 @@ public sealed class ClosenessPropertyTests
     [Property]
     public void Ranks_follow_closeness(GeneratedEvaluation generated)
     {
-        var ranking = DecisionEngine.Analyze(generated.Evaluation).Ranking;
+        var ranking = DecisionEngine.Analyse(generated.Evaluation).Ranking;
         Assert.Equal(1, ranking[0].Rank);
         for (var i = 1; i < ranking.Count; i++)
         {
@@ -34,7 +34,7 @@ public sealed class ClosenessPropertyTests
     [Property]
     public void Crisp_weight_shares_sum_to_one(GeneratedEvaluation generated)
     {
-        var weights = DecisionEngine.Analyze(generated.Evaluation).Weights;
+        var weights = DecisionEngine.Analyse(generated.Evaluation).Weights;
         Assert.Equal(1, weights.Sum(w => w.Crisp), 1e-12);
         Assert.All(weights, w => Assert.True(w.Fuzzy.Lower <= w.Fuzzy.Middle && w.Fuzzy.Middle <= w.Fuzzy.Upper));
     }

@@ -37,7 +37,7 @@ public sealed class ConsistentPairwisePropertyTests
             Ratings = [.. from a in new[] { "D1", "D2" } from s in new[] { "S1", "S2" } from c in criteria select new Rating(a, s, c.Id, "G")],
         };
 
-        var result = DecisionEngine.Analyze(evaluation);
+        var result = DecisionEngine.Analyse(evaluation);
         var expected = weights.Normalised;
         for (var j = 0; j < n; j++)
         {

@@ -23,7 +23,7 @@ public sealed class CrispReductionPropertyTests
     public void Crisp_terms_reduce_fuzzy_topsis_to_crisp_topsis(Seed seed)
     {
         var evaluation = EvaluationGenerator.Generate(seed.Value, CrispRating, CrispImportance);
-        var result = DecisionEngine.Analyze(evaluation);
+        var result = DecisionEngine.Analyse(evaluation);
         var expected = CrispTopsisReference.Closeness(evaluation);
 
         for (var i = 0; i < evaluation.Alternatives.Count; i++)

@@ -27,7 +27,7 @@ public sealed class DominancePropertyTests
         foreach (var ideal in new[] { IdealPoints.Unit, IdealPoints.Extreme })
         {
             var (evaluation, better, worse) = Dominated(panel, ideal);
-            var ranking = DecisionEngine.Analyze(evaluation).Ranking;
+            var ranking = DecisionEngine.Analyse(evaluation).Ranking;
             var b = ranking.Single(r => r.Alternative == better);
             var w = ranking.Single(r => r.Alternative == worse);
             Assert.True(b.Rank <= w.Rank, $"{ideal}: {better} (rank {b.Rank}, CC {b.Closeness}) dominates {worse} (rank {w.Rank}, CC {w.Closeness})");
@@ -55,7 +55,7 @@ public sealed class DominancePropertyTests
                 Assert.DoesNotContain(sweep.Reversals, r => Pair(r.Below, r.Above, better, worse));
             }
 
-            var critical = CriticalChanges.Compute(prepared, prepared.Analyze(), sweeps);
+            var critical = CriticalChanges.Compute(prepared, prepared.Analyse(), sweeps);
             Assert.DoesNotContain(critical.Changes, c => c.Reverses && Pair(c.Leader, c.Challenger, better, worse));
             foreach (var most in new[] { critical.TopAbsolute, critical.TopRelative, critical.AnyAbsolute, critical.AnyRelative })
             {
@@ -71,7 +71,7 @@ public sealed class DominancePropertyTests
         {
             var (evaluation, better, worse) = Dominated(panel, ideal);
             var prepared = DecisionEngine.Prepare(evaluation);
-            var result = prepared.Analyze();
+            var result = prepared.Analyse();
             var robustness = RobustnessAnalysis.Run(prepared, result, new RobustnessOptions(Draws: 64, Seed: (ulong)panel.Seed));
 
             foreach (var removal in robustness.Sensitivity.WithoutAlternative)

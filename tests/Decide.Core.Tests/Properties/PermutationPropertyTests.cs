@@ -40,8 +40,8 @@ public sealed class PermutationPropertyTests
 
     private static void AssertSameResults(Evaluation original, Evaluation permuted)
     {
-        var a = DecisionEngine.Analyze(original);
-        var b = DecisionEngine.Analyze(permuted);
+        var a = DecisionEngine.Analyse(original);
+        var b = DecisionEngine.Analyse(permuted);
 
         var ranked = b.Ranking.ToDictionary(r => r.Alternative);
         Assert.Equal(a.Ranking.Count, ranked.Count);

@@ -14,7 +14,7 @@ public sealed class Chen2000ExtremeIdealPoints
     [Fact]
     public void Extreme_ideal_points_keep_the_papers_ranking_order()
     {
-        var result = DecisionEngine.Analyze(Chen2000WorkedExample.Build(IdealPoints.Extreme));
+        var result = DecisionEngine.Analyse(Chen2000WorkedExample.Build(IdealPoints.Extreme));
         Assert.Equal(IdealPoints.Extreme, result.Options.Ideal);
         Assert.Equal(["A2", "A3", "A1"], result.Ranking.Select(r => r.Alternative));
         Assert.Equal([1, 2, 3], result.Ranking.Select(r => r.Rank));
@@ -23,8 +23,8 @@ public sealed class Chen2000ExtremeIdealPoints
     [Fact]
     public void Extreme_ideal_points_measure_from_closer_references_than_the_unit_points()
     {
-        var unit = DecisionEngine.Analyze(Chen2000WorkedExample.Build(IdealPoints.Unit)).Ranking.ToDictionary(r => r.Alternative);
-        var extreme = DecisionEngine.Analyze(Chen2000WorkedExample.Build(IdealPoints.Extreme)).Ranking;
+        var unit = DecisionEngine.Analyse(Chen2000WorkedExample.Build(IdealPoints.Unit)).Ranking.ToDictionary(r => r.Alternative);
+        var extreme = DecisionEngine.Analyse(Chen2000WorkedExample.Build(IdealPoints.Extreme)).Ranking;
 
         // The extreme points lie inside [0, 1], nearer every weighted rating than (1, 1, 1) and (0, 0, 0) are.
         Assert.All(extreme, r =>

@@ -57,7 +57,7 @@ public sealed class Chen2000WorkedExample
     [Fact]
     public void Ranking_is_A2_A3_A1_as_printed()
     {
-        var result = DecisionEngine.Analyze(Build());
+        var result = DecisionEngine.Analyse(Build());
         Assert.Equal(["A2", "A3", "A1"], result.Ranking.Select(r => r.Alternative));
         Assert.Equal([1, 2, 3], result.Ranking.Select(r => r.Rank));
 
@@ -103,7 +103,7 @@ public sealed class Chen2000WorkedExample
     public void Table5_cells_are_the_engines_group_means_rounded_to_one_decimal()
     {
         // A1·C1 and A3·C5 are confirmed as printed; for the other cells this checks the reconstruction above.
-        var result = DecisionEngine.Analyze(Build());
+        var result = DecisionEngine.Analyse(Build());
         var printed = Table5().Matrix;
         for (var i = 0; i < 3; i++)
         {
@@ -120,14 +120,14 @@ public sealed class Chen2000WorkedExample
     {
         // Erratum: the mean of H (0.7, 0.9, 1), VH (0.9, 1, 1), MH (0.5, 0.7, 0.9) is (2.1, 2.6, 2.9)/3 [derived];
         // the paper prints (0.7, 0.9, 1).
-        var c1 = DecisionEngine.Analyze(Build()).Weights.Single(w => w.Criterion == "C1").Fuzzy;
+        var c1 = DecisionEngine.Analyse(Build()).Weights.Single(w => w.Criterion == "C1").Fuzzy;
         Assert.Equal(0.7, c1.Lower, 12);
         Assert.Equal(2.6 / 3, c1.Middle, 12);
         Assert.Equal(2.9 / 3, c1.Upper, 12);
         Assert.Equal(Table5().Weights[0], new Tfn(Math.Round(c1.Lower, 1), Math.Round(c1.Middle, 1), Math.Round(c1.Upper, 1)));
 
         // The reconstructed C2–C5 weights are the engine's means rounded to two decimals.
-        var weights = DecisionEngine.Analyze(Build()).Weights;
+        var weights = DecisionEngine.Analyse(Build()).Weights;
         for (var j = 1; j < 5; j++)
         {
             var w = weights.Single(x => x.Criterion == $"C{j + 1}").Fuzzy;
@@ -229,7 +229,7 @@ public sealed class Chen2000WorkedExample
     [InlineData("A3", 0.702)] // [derived]; the paper prints 0.71
     public void Closeness_of_the_unrounded_computation(string alternative, double derived)
     {
-        var result = DecisionEngine.Analyze(Build());
+        var result = DecisionEngine.Analyse(Build());
         Assert.Equal(derived, result.Ranking.Single(r => r.Alternative == alternative).Closeness, 3);
     }
 
@@ -239,7 +239,7 @@ public sealed class Chen2000WorkedExample
     [InlineData("A3", 1.602, 3.771)] // [derived]; printed 1.59 and 3.85
     public void Distances_of_the_unrounded_computation(string alternative, double dStar, double dMinus)
     {
-        var ranked = DecisionEngine.Analyze(Build()).Ranking.Single(r => r.Alternative == alternative);
+        var ranked = DecisionEngine.Analyse(Build()).Ranking.Single(r => r.Alternative == alternative);
         Assert.Equal(dStar, ranked.DPlus, 3);
         Assert.Equal(dMinus, ranked.DMinus, 3);
     }

@@ -34,7 +34,7 @@ public sealed class Saaty1990HouseExample
         4, 7, 5, 8, 6, 6, 2, 1,
     ];
 
-    private static ConsistencyReport Report() => PairwiseConsistency.Analyze(Matrix, Criteria);
+    private static ConsistencyReport Report() => PairwiseConsistency.Analyse(Matrix, Criteria);
 
     [Fact]
     public void The_recalled_matrix_is_reciprocal()

@@ -41,7 +41,7 @@ public sealed class RankTests
             Values = [],
             Gates = [],
         };
-        var ranking = DecisionEngine.Analyze(evaluation).Ranking;
+        var ranking = DecisionEngine.Analyse(evaluation).Ranking;
         Assert.Equal(["S1", "S2", "S3", "S4"], ranking.Select(r => r.Alternative));
         Assert.Equal([1, 2, 2, 4], ranking.Select(r => r.Rank));
         Assert.Equal(ranking[1].Closeness, ranking[2].Closeness);
@@ -54,7 +54,7 @@ public sealed class RankTests
         {
             Gates = [new GateResult("S1", "INSURED", true), new GateResult("S2", "INSURED", false), new GateResult("S3", "INSURED", true)],
         };
-        var result = DecisionEngine.Analyze(evaluation);
+        var result = DecisionEngine.Analyse(evaluation);
         Assert.Equal(["S1", "S3"], result.Ranking.Select(r => r.Alternative).Order());
         var excluded = Assert.Single(result.Excluded);
         Assert.Equal("S2", excluded.Alternative);

@@ -31,7 +31,7 @@ public sealed class WeightBoundTests
     public void A_dearer_copy_of_a_bid_never_overtakes_it_whatever_the_weight_of_price()
     {
         var prepared = DecisionEngine.Prepare(CopyDearerBy25Percent());
-        var result = prepared.Analyze();
+        var result = prepared.Analyse();
         var robustness = RobustnessAnalysis.Run(prepared, result, new RobustnessOptions(Draws: 256));
 
         foreach (var sweep in robustness.Sensitivity.Sweeps)
@@ -84,8 +84,8 @@ public sealed class WeightBoundTests
             PanelGenerator.WideImportance.Terms.Select(t => t with { Value = (1 / 10.0) * t.Value }).ToArray());
         var narrow = wide with { ImportanceScale = tenth };
 
-        var a = DecisionEngine.Analyze(wide).Ranking;
-        var b = DecisionEngine.Analyze(narrow).Ranking;
+        var a = DecisionEngine.Analyse(wide).Ranking;
+        var b = DecisionEngine.Analyse(narrow).Ranking;
         Assert.Equal(b.Select(r => r.Alternative), a.Select(r => r.Alternative));
         for (var i = 0; i < a.Count; i++)
         {

@@ -34,7 +34,7 @@ public sealed class BidSetAndPanelTests
             Values = [new NumericValue("A1", "P", 200), new NumericValue("A2", "P", 130), new NumericValue("A3", "P", 10)],
         };
         var prepared = DecisionEngine.Prepare(evaluation);
-        var full = prepared.Analyze().Ranking.Select(r => r.Alternative).ToArray();
+        var full = prepared.Analyse().Ranking.Select(r => r.Alternative).ToArray();
         var withoutA3 = WithoutAlternative.Run(prepared).Single(r => r.Alternative == "A3");
         var before = Array.IndexOf(full, "A1") < Array.IndexOf(full, "A2");
         var after = withoutA3.Ranking.ToList().IndexOf("A1") < withoutA3.Ranking.ToList().IndexOf("A2");
@@ -64,7 +64,7 @@ public sealed class BidSetAndPanelTests
             ],
         };
         var prepared = DecisionEngine.Prepare(evaluation);
-        var baseResult = prepared.Analyze();
+        var baseResult = prepared.Analyse();
         Assert.Equal("A1", baseResult.Ranking[0].Alternative);
         var loo = LeaveOneOut.Run(prepared, baseResult);
         Assert.Equal(["E1", "E2", "E3"], loo.Select(l => l.Assessor));
@@ -90,7 +90,7 @@ public sealed class BidSetAndPanelTests
             ],
         };
         var prepared = DecisionEngine.Prepare(evaluation);
-        var loo = LeaveOneOut.Run(prepared, prepared.Analyze());
+        var loo = LeaveOneOut.Run(prepared, prepared.Analyse());
         Assert.Null(loo[0].Winner);
         Assert.Contains("nobody rated", loo[0].Problem);
     }
@@ -104,7 +104,7 @@ public sealed class BidSetAndPanelTests
         };
         var prepared = DecisionEngine.Prepare(evaluation);
 
-        var loo = LeaveOneOut.Run(prepared, prepared.Analyze());
+        var loo = LeaveOneOut.Run(prepared, prepared.Analyse());
 
         Assert.All(loo, l => Assert.Null(l.Problem));
         Assert.All(loo, l => Assert.Equal(3, l.Ranking.Count));

@@ -170,7 +170,7 @@ public sealed class CriticalChangeTests
     public void Every_pair_of_every_criterion_is_listed_and_unreversed_pairs_say_so()
     {
         var prepared = DecisionEngine.Prepare(RobustnessFixtures.TradeOff());
-        var result = prepared.Analyze();
+        var result = prepared.Analyse();
         var critical = CriticalChanges.Compute(prepared, result, WeightSweeps.Run(prepared));
         var n = result.Ranking.Count;
         Assert.Equal(prepared.Criteria.Count * n * (n - 1) / 2, critical.Changes.Count);
@@ -182,7 +182,7 @@ public sealed class CriticalChangeTests
     private static (PreparedEvaluation Prepared, AnalysisResult Result, CriticalChangesResult Critical) Analyse(double[][] values)
     {
         var prepared = DecisionEngine.Prepare(Crisp(values));
-        var result = prepared.Analyze();
+        var result = prepared.Analyse();
         return (prepared, result, CriticalChanges.Compute(prepared, result, WeightSweeps.Run(prepared)));
     }
 

@@ -57,7 +57,7 @@ public sealed class MethodCrossCheckTests
         // and A2's on C2 is (26/3 − 21/3)/10 = 0.1667: totals 0.4167 and 0.4500, so A2 leads [derived].
         var prepared = DecisionEngine.Prepare(RobustnessFixtures.Uniform([["P", "MG"], ["VP", "G"]], ["5", "5"],
             assessors: 1, importanceScale: RobustnessFixtures.CrispImportance));
-        var result = prepared.Analyze();
+        var result = prepared.Analyse();
         Assert.Equal(["A1", "A2"], result.Ranking.Select(r => r.Alternative));
         Assert.Equal(0.3125, result.Ranking[0].Closeness, 3);
         Assert.Equal(0.2603, result.Ranking[1].Closeness, 3);
@@ -75,7 +75,7 @@ public sealed class MethodCrossCheckTests
     public void Three_comparisons_each_with_tau_against_the_main_ranking()
     {
         var prepared = DecisionEngine.Prepare(Published.Chen2000WorkedExample.Build());
-        var result = prepared.Analyze();
+        var result = prepared.Analyse();
         var methods = MethodCrossCheck.Run(prepared, result);
         Assert.Equal(["aggregation:geometric", "ideal:extreme", "weighted-total"], methods.Select(m => m.Method));
         Assert.All(methods.Where(m => m.Applicable), m => Assert.InRange(m.KendallTau!.Value, -1, 1));
@@ -91,7 +91,7 @@ public sealed class MethodCrossCheckTests
     public void The_geometric_check_on_Chens_scales_says_in_one_line_which_terms_reach_0()
     {
         var prepared = DecisionEngine.Prepare(Published.Chen2000WorkedExample.Build());
-        var geometric = MethodCrossCheck.Run(prepared, prepared.Analyze()).Single(m => m.Method == "aggregation:geometric");
+        var geometric = MethodCrossCheck.Run(prepared, prepared.Analyse()).Single(m => m.Method == "aggregation:geometric");
         Assert.Empty(geometric.Ranking);
         Assert.Null(geometric.KendallTau);
         Assert.Equal(
@@ -104,10 +104,10 @@ public sealed class MethodCrossCheckTests
     {
         // Stands in for the engine refusing the geometric mean on a scale with a term of value 0.
         var prepared = DecisionEngine.Prepare(Published.Chen2000WorkedExample.Build());
-        var result = prepared.Analyze();
+        var result = prepared.Analyse();
         var methods = MethodCrossCheck.Run(prepared, result, e => e.Options.Aggregation == AggregationRule.Geometric
             ? throw new InvalidEvaluationException("$.ratingScale.terms[0]", "the geometric mean is undefined for a term with a value of 0.")
-            : DecisionEngine.Analyze(e));
+            : DecisionEngine.Analyse(e));
 
         var geometric = methods.Single(m => m.Method == "aggregation:geometric");
         Assert.Equal("not applicable: the geometric mean is undefined for a term with a value of 0", geometric.Note);

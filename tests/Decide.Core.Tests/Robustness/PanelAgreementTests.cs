@@ -41,7 +41,7 @@ public sealed class PanelAgreementTests
     public void In_an_identical_panel_every_assessor_ranks_as_the_panel_does()
     {
         var evaluation = IdenticalPanel();
-        var panel = DecisionEngine.Analyze(evaluation);
+        var panel = DecisionEngine.Analyse(evaluation);
 
         var agreement = PanelAgreement.Measure(DecisionEngine.Prepare(evaluation));
 

@@ -275,7 +275,7 @@ public sealed class RankAcceptabilityTests
         var evaluation = RobustnessFixtures.Uniform([["7", "4"], ["5", "9"], ["3", "3"]], ["8", "5"],
             rating: RobustnessFixtures.CrispRating, importanceScale: RobustnessFixtures.CrispImportance);
         var prepared = DecisionEngine.Prepare(evaluation);
-        var order = prepared.Analyze().Ranking.Select(r => r.Alternative).ToArray();
+        var order = prepared.Analyse().Ranking.Select(r => r.Alternative).ToArray();
         var result = RankAcceptabilityAnalysis.Run(prepared, 1000, 3);
         for (var r = 0; r < order.Length; r++)
         {

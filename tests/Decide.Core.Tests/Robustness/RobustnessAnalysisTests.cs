@@ -9,7 +9,7 @@ public sealed class RobustnessAnalysisTests
     public void Every_section_is_filled_for_a_real_panel()
     {
         var prepared = DecisionEngine.Prepare(Published.Chen2000WorkedExample.Build());
-        var result = prepared.Analyze();
+        var result = prepared.Analyse();
         var robustness = RobustnessAnalysis.Run(prepared, result, new RobustnessOptions(Draws: 2000, Seed: 9));
         Assert.Equal(5, robustness.Sensitivity.Sweeps.Count);
         Assert.Equal(3, robustness.Sensitivity.LeaveOneOut.Count);
@@ -24,7 +24,7 @@ public sealed class RobustnessAnalysisTests
     public void The_same_seed_reproduces_the_whole_section_and_the_summary()
     {
         var prepared = DecisionEngine.Prepare(RobustnessFixtures.TradeOff());
-        var result = prepared.Analyze();
+        var result = prepared.Analyse();
         var a = RobustnessAnalysis.Run(prepared, result, new RobustnessOptions(3000, 77, Threads: 1));
         var b = RobustnessAnalysis.Run(prepared, result, new RobustnessOptions(3000, 77, Threads: 2));
         Assert.Equal(a.Summary, b.Summary);
@@ -35,7 +35,7 @@ public sealed class RobustnessAnalysisTests
     public void The_summary_names_the_closest_challenge_with_the_critical_weight()
     {
         var prepared = DecisionEngine.Prepare(RobustnessFixtures.TradeOff());
-        var result = prepared.Analyze();
+        var result = prepared.Analyse();
         var robustness = RobustnessAnalysis.Run(prepared, result, new RobustnessOptions(1000, 1));
         var most = robustness.Sensitivity.CriticalChanges.TopShare!;
         var sentence = Assert.Single(robustness.Summary, s => s.StartsWith("The closest challenge", StringComparison.Ordinal));
@@ -48,7 +48,7 @@ public sealed class RobustnessAnalysisTests
     {
         var prepared = DecisionEngine.Prepare(RobustnessFixtures.Uniform(
             [["VG", "VG", "G"], ["MP", "F", "P"], ["F", "MP", "MP"]], ["H", "M", "VH"]));
-        var result = prepared.Analyze();
+        var result = prepared.Analyse();
         var robustness = RobustnessAnalysis.Run(prepared, result, new RobustnessOptions(2000, 4));
         Assert.Null(robustness.Sensitivity.CriticalChanges.TopShare);
         Assert.Equal(1.0, robustness.Sensitivity.Acceptability.Alternatives[0].Ranks[0]);
@@ -61,7 +61,7 @@ public sealed class RobustnessAnalysisTests
     public void Zero_draws_skips_rank_acceptability_and_keeps_every_other_section()
     {
         var prepared = DecisionEngine.Prepare(RobustnessFixtures.TradeOff());
-        var result = prepared.Analyze();
+        var result = prepared.Analyse();
         var robustness = RobustnessAnalysis.Run(prepared, result, new RobustnessOptions(Draws: 0, Seed: 5));
         Assert.Equal(0, robustness.Sensitivity.Acceptability.Draws);
         Assert.Empty(robustness.Sensitivity.Acceptability.Alternatives);

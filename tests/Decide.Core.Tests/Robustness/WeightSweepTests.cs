@@ -75,7 +75,7 @@ public sealed class WeightSweepTests
     {
         // At t = ŵₖ every weight is multiplied by 1: the sweep must give the analysis' own closeness.
         var prepared = DecisionEngine.Prepare(RobustnessFixtures.TradeOff());
-        var baseResult = prepared.Analyze();
+        var baseResult = prepared.Analyse();
         for (var k = 0; k < prepared.Criteria.Count; k++)
         {
             var cc = new WeightSweeps.Sweeper(prepared, k).Closeness(prepared.Weights[k].Crisp).ToArray();
@@ -91,7 +91,7 @@ public sealed class WeightSweepTests
     public void The_crisp_base_closeness_is_the_weighted_sum_over_two()
     {
         // The closed form at the plan's own weights (0.4, 0.6), through the whole analysis.
-        var result = CrispTwoCriteria().Analyze();
+        var result = CrispTwoCriteria().Analyse();
         for (var i = 0; i < 3; i++)
         {
             Assert.Equal(ClosedFormCloseness(i, 0.4), result.Ranking.Single(r => r.Alternative == $"A{i + 1}").Closeness, 12);

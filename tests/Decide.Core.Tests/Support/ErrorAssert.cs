@@ -11,7 +11,7 @@ public static class ErrorAssert
     /// </summary>
     public static IReadOnlyList<EvaluationError> Refused(Evaluation evaluation)
     {
-        var exception = Assert.Throws<InvalidEvaluationException>(() => DecisionEngine.Analyze(evaluation));
+        var exception = Assert.Throws<InvalidEvaluationException>(() => DecisionEngine.Analyse(evaluation));
         Assert.NotEmpty(exception.Errors);
         return exception.Errors;
     }

@@ -24,7 +24,7 @@ public sealed class GroupWeightsTests
                 new ImportanceRating("D1", "QUALITY", "VH"), new ImportanceRating("D1", "STAFF", "M"),
             ],
         };
-        var weights = DecisionEngine.Analyze(evaluation).Weights.ToDictionary(w => w.Criterion);
+        var weights = DecisionEngine.Analyse(evaluation).Weights.ToDictionary(w => w.Criterion);
 
         // Local weights: each member's importance over the sum of the members' centroids, VH and M on Chen's scale.
         Tfn high = new(0.7, 0.9, 1.0), veryHigh = new(0.9, 1.0, 1.0), medium = new(0.3, 0.5, 0.7);
@@ -50,7 +50,7 @@ public sealed class GroupWeightsTests
     public void Pairwise_weighting_multiplies_the_top_and_group_matrices()
     {
         // TECH over PRICE 3̃ = (2, 3, 4) at the top level, QUALITY over STAFF 2̃ = (1, 2, 3) within TECH.
-        var result = DecisionEngine.Analyze(SampleEvaluation.WithGroupedPairwise());
+        var result = DecisionEngine.Analyse(SampleEvaluation.WithGroupedPairwise());
         var weights = result.Weights.ToDictionary(w => w.Criterion);
 
         var top = new FuzzyPairwiseMatrix(["TECH", "PRICE"]);
@@ -106,7 +106,7 @@ public sealed class GroupWeightsTests
                 SampleEvaluation.Judgement("D1", "STAFF", "PRICE", "2"),
             ],
         };
-        var weights = DecisionEngine.Analyze(evaluation).Weights.ToDictionary(w => w.Criterion);
+        var weights = DecisionEngine.Analyse(evaluation).Weights.ToDictionary(w => w.Criterion);
         Assert.Equal(Tfn.One, weights["QUALITY"].Local);
         Assert.Equal(weights["QUALITY"].GroupWeight, weights["QUALITY"].Fuzzy);
     }

@@ -69,7 +69,7 @@ public sealed partial class ExchangeService(
             var m = await access.LoadAsync(db, id, ct);
             ResultsService.RequireResultsVisible(m, "export the results");
             var e = (await composer.ComposeAsync(db, m.Evaluation, ct)).Evaluation;
-            var result = DecisionEngine.Analyze(e);
+            var result = DecisionRun.Of(e).Analysis;
             var names = e.Alternatives.ToDictionary(a => a.Id, a => a.Name, StringComparer.Ordinal);
             var csv = new SpreadsheetCsv().Header("rank", "bidder", "name", "closeness", "d_plus", "d_minus", "failed_gates");
             foreach (var r in result.Ranking)

@@ -1,5 +1,6 @@
 using System.Security.Cryptography;
 using System.Text;
+using Decide.Core;
 using Decide.Core.Analysis;
 using Decide.Core.Robustness;
 using Decide.Interchange;
@@ -16,9 +17,7 @@ public static class ResultsComputation
     /// <exception cref="Decide.Core.InvalidEvaluationException">The evaluation cannot be analysed; every problem by JSON path.</exception>
     public static ResultsJson Run(EvaluationFile file, RobustnessOptions options)
     {
-        var prepared = DecisionEngine.Prepare(file.Evaluation);
-        var result = prepared.Analyze();
-        var robustness = RobustnessAnalysis.Run(prepared, result, options);
+        var (_, result, robustness) = DecisionRun.Of(file.Evaluation, options);
         var json = ResultsWriter.ToJson(result, file.Evaluation, robustness);
         return new ResultsJson(json, Convert.ToHexStringLower(SHA256.HashData(Encoding.UTF8.GetBytes(json))));
     }

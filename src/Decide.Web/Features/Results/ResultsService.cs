@@ -1,3 +1,4 @@
+using Decide.Core;
 using Decide.Core.Analysis;
 using Decide.Core.Robustness;
 using Decide.Data;
@@ -37,18 +38,14 @@ public sealed class ResultsService(
     public async Task<RankedEvaluation> RankAsync(Guid id, CancellationToken ct = default)
     {
         var (summary, file) = await ComposeAsync(id, ct);
-        var (prepared, analysis) = await Task.Run(() =>
-        {
-            var p = DecisionEngine.Prepare(file.Evaluation);
-            return (p, p.Analyze());
-        }, ct);
-        await AuditViewAsync(id, "ranking " + string.Join(" > ", analysis.Ranking.Select(r => r.Alternative)), ct);
-        return new RankedEvaluation(summary, file, prepared, analysis);
+        var run = await Task.Run(() => DecisionRun.Of(file.Evaluation), ct);
+        await AuditViewAsync(id, "ranking " + string.Join(" > ", run.Analysis.Ranking.Select(r => r.Alternative)), ct);
+        return new RankedEvaluation(summary, file, run.Prepared, run.Analysis);
     }
 
     /// <summary>The robustness checks (sensitivity, rank acceptability, panel agreement) of a ranking, on a worker thread.</summary>
     public static Task<RobustnessResult> CheckRobustnessAsync(RankedEvaluation ranked, RobustnessOptions options, CancellationToken ct = default) =>
-        Task.Run(() => RobustnessAnalysis.Run(ranked.Prepared, ranked.Analysis, options), ct);
+        Task.Run(() => new DecisionRun(ranked.Prepared, ranked.Analysis, null).WithRobustness(options).Robustness!, ct);
 
     /// <summary>
     /// Results are visible to the facilitator, the observer, the approver and the assessors once moderation has

@@ -1,0 +1,29 @@
+using Decide.Core.Analysis;
+using Decide.Core.Model;
+using Decide.Core.Robustness;
+
+namespace Decide.Core;
+
+/// <summary>
+/// The engine's one pipeline, in the order every caller needs it: validate and prepare the evaluation, analyse it
+/// (weights, consistency, aggregation, ranking) and, when asked, check the ranking's robustness on the same prepared
+/// evaluation. The command line, the service and the record all start here, so the three cannot drift apart.
+/// </summary>
+/// <param name="Prepared">The validated evaluation compiled for analysis.</param>
+/// <param name="Analysis">Weights, consistency, the decision matrix and the ranking.</param>
+/// <param name="Robustness">Sensitivity, agreement and summary; null when not asked for.</param>
+public sealed record DecisionRun(PreparedEvaluation Prepared, AnalysisResult Analysis, RobustnessResult? Robustness)
+{
+    /// <summary>Validates, prepares and analyses; with <paramref name="robustness"/>, runs the robustness checks too.</summary>
+    /// <exception cref="InvalidEvaluationException">The evaluation has problems; every one is listed with its place.</exception>
+    public static DecisionRun Of(Evaluation evaluation, RobustnessOptions? robustness = null)
+    {
+        var prepared = DecisionEngine.Prepare(evaluation);
+        var run = new DecisionRun(prepared, prepared.Analyse(), null);
+        return robustness is null ? run : run.WithRobustness(robustness);
+    }
+
+    /// <summary>The same run with its robustness checked (or checked again with other settings).</summary>
+    public DecisionRun WithRobustness(RobustnessOptions options) =>
+        this with { Robustness = RobustnessAnalysis.Run(Prepared, Analysis, options) };
+}
