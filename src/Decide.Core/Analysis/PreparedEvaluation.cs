@@ -95,34 +95,34 @@ public sealed class PreparedEvaluation
     public IReadOnlyList<Assessor> Assessors { get; }
 
     /// <summary>Per scored criterion: true for cost.</summary>
-    public bool[] IsCost { get; }
+    internal bool[] IsCost { get; }
 
     /// <summary>The derived criterion weights.</summary>
     public IReadOnlyList<CriterionWeight> Weights { get; }
 
     /// <summary>The fuzzy weights alone, in criterion order.</summary>
-    public Tfn[] FuzzyWeights { get; }
+    internal Tfn[] FuzzyWeights { get; }
 
     /// <summary>Pairwise consistency reports (empty for importance weighting).</summary>
     public IReadOnlyList<MatrixConsistency> Consistency { get; }
 
     /// <summary>The aggregated decision matrix x̃ᵢⱼ, alternative-major.</summary>
-    public Tfn[] Matrix { get; }
+    internal Tfn[] Matrix { get; }
 
     /// <summary>
     /// Each assessor's rating as a step of the rating scale, indexed [assessor × n × m + alternative × m + criterion];
     /// −1 where they did not rate (declined, not assigned, or a numeric criterion).
     /// </summary>
-    public int[] Steps { get; }
+    internal int[] Steps { get; }
 
     /// <summary>Numeric criterion values, alternative-major (0 for linguistic criteria).</summary>
-    public double[] Values { get; }
+    internal double[] Values { get; }
 
     /// <summary>Assessor weights as given in the plan.</summary>
-    public double[] AssessorWeights { get; }
+    internal double[] AssessorWeights { get; }
 
     /// <summary>Per cell, the moderated term that replaces the aggregate, or null (alternative-major).</summary>
-    public string?[] ModeratedTerms { get; }
+    internal string?[] ModeratedTerms { get; }
 
     internal List<DeclinedCell>?[] Declines { get; }
 
