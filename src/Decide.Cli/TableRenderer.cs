@@ -1,4 +1,5 @@
 using System.Globalization;
+using Decide.Core.Weighting;
 using Decide.Core.Analysis;
 using Decide.Core.Fuzzy;
 using Decide.Core.Model;

@@ -2,6 +2,7 @@ using System.Reflection;
 using System.Text;
 using System.Text.Encodings.Web;
 using System.Text.Json;
+using Decide.Core.Weighting;
 using Decide.Core.Analysis;
 using Decide.Core.Consistency;
 using Decide.Core.Model;

@@ -1,5 +1,6 @@
 using Decide.Core.Consistency;
 using Decide.Core.Model;
+using Decide.Core.Weighting;
 
 namespace Decide.Core.Analysis;
 
@@ -10,7 +11,7 @@ namespace Decide.Core.Analysis;
 public static class EvaluationValidator
 {
     /// <summary>The id reserved for the panel's aggregate in results.</summary>
-    public const string PanelId = "panel";
+    private const string PanelId = WeightStructure.PanelId;
 
     /// <summary>Returns every problem found; an empty list means the evaluation can be analysed.</summary>
     public static IReadOnlyList<EvaluationError> Validate(Evaluation evaluation)
@@ -320,8 +321,7 @@ public static class EvaluationValidator
         private bool IsNode(string id) =>
             _groups.ContainsKey(id) || (_criteria.TryGetValue(id, out var c) && c.Kind != CriterionKind.Gate);
 
-        private IEnumerable<string> Nodes() =>
-            e.Groups.Select(g => g.Id).Concat(e.Criteria.Where(c => c.Kind != CriterionKind.Gate).Select(c => c.Id)).Distinct();
+        private IEnumerable<string> Nodes() => WeightStructure.Nodes(e);
 
         private void Importance()
         {
@@ -486,19 +486,8 @@ public static class EvaluationValidator
             _criteria.TryGetValue(node, out var c) && c.Group is { } g ? g : "";
 
         /// <summary>The matrices to fill: "" for the top level (groups and ungrouped criteria), then one per group.</summary>
-        private List<(string Name, List<string> Items)> MatrixOf()
-        {
-            var top = e.Groups.Select(g => g.Id)
-                .Concat(e.Criteria.Where(c => c.Kind != CriterionKind.Gate && c.Group is null).Select(c => c.Id))
-                .Distinct().ToList();
-            var result = new List<(string, List<string>)> { ("", top) };
-            foreach (var group in e.Groups)
-            {
-                result.Add((group.Id, e.Criteria.Where(c => c.Kind != CriterionKind.Gate && c.Group == group.Id).Select(c => c.Id).ToList()));
-            }
-
-            return result;
-        }
+        private List<(string Name, IReadOnlyList<string> Items)> MatrixOf() =>
+            WeightStructure.Matrices(e).Select(m => (m.Group ?? "", m.Items)).ToList();
 
         private void Values(HashSet<string> excluded)
         {

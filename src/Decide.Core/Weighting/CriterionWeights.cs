@@ -1,5 +1,4 @@
 using Decide.Core.Aggregation;
-using Decide.Core.Analysis;
 using Decide.Core.Consistency;
 using Decide.Core.Fuzzy;
 using Decide.Core.Model;
@@ -44,7 +43,7 @@ public static class CriterionWeights
         }
         else
         {
-            (node, consistency) = FromPairwise(evaluation, scored);
+            (node, consistency) = FromPairwise(evaluation);
         }
 
         var fuzzy = new Tfn[scored.Count];
@@ -114,7 +113,7 @@ public static class CriterionWeights
         ? step
         : throw new InvalidOperationException($"Unvalidated importance term {term}.");
 
-    private static (Dictionary<string, Tfn>, MatrixConsistency[]) FromPairwise(Evaluation e, IReadOnlyList<Criterion> scored)
+    private static (Dictionary<string, Tfn>, MatrixConsistency[]) FromPairwise(Evaluation e)
     {
         var node = new Dictionary<string, Tfn>(StringComparer.Ordinal);
         var reports = new List<MatrixConsistency>();
@@ -132,15 +131,9 @@ public static class CriterionWeights
 
         var judges = e.Assessors.Where(a => byAssessor.ContainsKey(a.Id)).ToArray();
 
-        var matrices = new List<(string? Group, string[] Items)>
+        foreach (var (group, items) in WeightStructure.Matrices(e))
         {
-            (null, e.Groups.Select(g => g.Id).Concat(scored.Where(c => c.Group is null).Select(c => c.Id)).ToArray()),
-        };
-        matrices.AddRange(e.Groups.Select(g => ((string?)g.Id, scored.Where(c => c.Group == g.Id).Select(c => c.Id).ToArray())));
-
-        foreach (var (group, items) in matrices)
-        {
-            if (items.Length == 1)
+            if (items.Count == 1)
             {
                 node[items[0]] = Tfn.One;
                 continue;
@@ -164,9 +157,9 @@ public static class CriterionWeights
             }
 
             var panel = FuzzyPairwiseMatrix.GeometricMean(individual, judges.Select(j => j.Weight).ToArray());
-            var panelReport = Report(EvaluationValidator.PanelId, group, panel);
+            var panelReport = Report(WeightStructure.PanelId, group, panel);
             reports.Add(panelReport);
-            for (var i = 0; i < items.Length; i++)
+            for (var i = 0; i < items.Count; i++)
             {
                 node[items[i]] = panelReport.Weights[i];
             }

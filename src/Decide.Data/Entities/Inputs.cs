@@ -28,8 +28,14 @@ public sealed class WeightJudgement : IVersioned
 
     public string AssessorCode { get; set; } = "";
 
-    /// <summary>"importance" or "pairwise".</summary>
-    public string Kind { get; set; } = "importance";
+    /// <summary>What <see cref="Kind"/> holds for an importance term of a criterion or group.</summary>
+    public const string ImportanceKind = "importance";
+
+    /// <summary>What <see cref="Kind"/> holds for a pairwise comparison of two items.</summary>
+    public const string PairwiseKind = "pairwise";
+
+    /// <summary><see cref="ImportanceKind"/> or <see cref="PairwiseKind"/>.</summary>
+    public string Kind { get; set; } = ImportanceKind;
 
     /// <summary>Importance: the criterion or group. Pairwise: the row item.</summary>
     public string Node { get; set; } = "";

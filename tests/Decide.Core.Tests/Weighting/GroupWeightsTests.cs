@@ -84,7 +84,7 @@ public sealed class GroupWeightsTests
 
         // One report per matrix for D1 and one for the panel, the group's matrix named by its group.
         Assert.Equal(4, result.Consistency.Count);
-        Assert.Contains(result.Consistency, c => c.Assessor == EvaluationValidator.PanelId && c.Group == "TECH");
+        Assert.Contains(result.Consistency, c => c.Assessor == WeightStructure.PanelId && c.Group == "TECH");
         Assert.Contains(result.Consistency, c => c.Assessor == "D1" && c.Group is null && c.Items.SequenceEqual(["TECH", "PRICE"]));
     }
 

@@ -1,4 +1,5 @@
 using System.Text.Json;
+using Decide.Core.Weighting;
 using Decide.Core.Fuzzy;
 using Decide.Core.Model;
 using Decide.Data;
@@ -49,12 +50,12 @@ public sealed class EvaluationComposer
         {
             Alternatives = alternatives.Select(a => new Alternative(a.Code, a.Name)).ToArray(),
             Assessors = assessors,
-            Importance = judgements.Where(j => j.Kind == "importance")
-                .OrderBy(j => A(j.AssessorCode)).ThenBy(j => NodeOrder(plan.Evaluation, j.Node))
+            Importance = judgements.Where(j => j.Kind == WeightJudgement.ImportanceKind)
+                .OrderBy(j => A(j.AssessorCode)).ThenBy(j => WeightStructure.NodeOrder(plan.Evaluation, j.Node))
                 .Select(j => new ImportanceRating(j.AssessorCode, j.Node, j.Term ?? "")).ToArray(),
-            Pairwise = judgements.Where(j => j.Kind == "pairwise")
+            Pairwise = judgements.Where(j => j.Kind == WeightJudgement.PairwiseKind)
                 .OrderBy(j => A(j.AssessorCode)).ThenBy(j => j.Id)
-                .Select(j => new PairwiseJudgement(j.AssessorCode, j.Node, j.Column ?? "", PairwiseValue(plan.Evaluation, j), j.Term)).ToArray(),
+                .Select(j => new PairwiseJudgement(j.AssessorCode, j.Node, j.Column ?? "", WeightStructure.PairwiseValue(plan.Evaluation, j.Term, j.Lower, j.Middle, j.Upper), j.Term)).ToArray(),
             Ratings = ratings.OrderBy(r => A(r.AssessorCode)).ThenBy(r => B(r.AlternativeCode)).ThenBy(r => C(r.CriterionId))
                 .Select(r => new Rating(r.AssessorCode, r.AlternativeCode, r.CriterionId, r.Term, r.Rationale, r.DeclinedReason)).ToArray(),
             Values = values.OrderBy(v => B(v.AlternativeCode)).ThenBy(v => C(v.CriterionId))
@@ -72,35 +73,4 @@ public sealed class EvaluationComposer
     /// <summary>The criteria assigned to a seat, or null for all linguistic criteria.</summary>
     public static IReadOnlyList<string>? Assigned(PanelMember seat) =>
         seat.AssignedCriteriaJson is null ? null : JsonSerializer.Deserialize<string[]>(seat.AssignedCriteriaJson);
-
-    private static int NodeOrder(Evaluation plan, string node)
-    {
-        for (var i = 0; i < plan.Groups.Count; i++)
-        {
-            if (plan.Groups[i].Id == node)
-            {
-                return i;
-            }
-        }
-
-        for (var i = 0; i < plan.Criteria.Count; i++)
-        {
-            if (plan.Criteria[i].Id == node)
-            {
-                return plan.Groups.Count + i;
-            }
-        }
-
-        return int.MaxValue;
-    }
-
-    private static Tfn PairwiseValue(Evaluation plan, WeightJudgement j)
-    {
-        if (j.Term is { } term && plan.PairwiseScale.TryFind(term, out var step))
-        {
-            return plan.PairwiseScale[step].Value;
-        }
-
-        return new Tfn(j.Lower ?? 1, j.Middle ?? 1, j.Upper ?? 1);
-    }
 }

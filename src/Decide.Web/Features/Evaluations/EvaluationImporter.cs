@@ -59,11 +59,11 @@ public static class EvaluationImporter
         db.Evaluations.Add(stored);
         db.WeightJudgements.AddRange(e.Importance.Select(r => new WeightJudgement
         {
-            EvaluationId = stored.Id, AssessorCode = r.Assessor, Kind = "importance", Node = r.Node, Term = r.Term, UpdatedAt = now,
+            EvaluationId = stored.Id, AssessorCode = r.Assessor, Kind = WeightJudgement.ImportanceKind, Node = r.Node, Term = r.Term, UpdatedAt = now,
         }));
         db.WeightJudgements.AddRange(e.Pairwise.Select(p => new WeightJudgement
         {
-            EvaluationId = stored.Id, AssessorCode = p.Assessor, Kind = "pairwise", Node = p.Row, Column = p.Col, Term = p.Term,
+            EvaluationId = stored.Id, AssessorCode = p.Assessor, Kind = WeightJudgement.PairwiseKind, Node = p.Row, Column = p.Col, Term = p.Term,
             Lower = p.Term is null ? p.Value.Lower : null, Middle = p.Term is null ? p.Value.Middle : null, Upper = p.Term is null ? p.Value.Upper : null,
             UpdatedAt = now,
         }));

@@ -2,6 +2,7 @@ using System.Runtime.InteropServices;
 using System.Security.Cryptography;
 using System.Text;
 using System.Text.Json;
+using Decide.Core.Weighting;
 using Decide.Core;
 using Decide.Core.Analysis;
 using Decide.Data;
@@ -212,7 +213,7 @@ public sealed class EvaluationService(
                 if (s.Role is PanelRole.Assessor or PanelRole.PriceEvaluator)
                 {
                     code = s.AssessorCode?.Trim();
-                    if (string.IsNullOrEmpty(code) || code == EvaluationValidator.PanelId || !codes.Add(code + "/" + s.Role))
+                    if (string.IsNullOrEmpty(code) || code == WeightStructure.PanelId || !codes.Add(code + "/" + s.Role))
                     {
                         errors[$"{at}.assessorCode"] = ["give each assessor a unique code (not \"panel\")"];
                         continue;
@@ -503,7 +504,7 @@ public sealed class EvaluationService(
             // The weights need no bid: derived from the plan and the judgements alone.
             var (_, reports) = Core.Weighting.CriterionWeights.Derive(file.Evaluation, file.Evaluation.Criteria.Where(c => c.Kind != Core.Model.CriterionKind.Gate).ToArray());
             consistency.AddRange(reports.Where(c => !c.Report.Acceptable).Select(c =>
-                $"{(c.Assessor == EvaluationValidator.PanelId ? "The panel's" : $"Assessor {c.Assessor}'s")} comparisons{(c.Group is null ? "" : $" within {c.Group}")} have a consistency ratio of {c.Report.Ratio:0.000}, above {c.Report.Threshold:0.00}."));
+                $"{(c.Assessor == WeightStructure.PanelId ? "The panel's" : $"Assessor {c.Assessor}'s")} comparisons{(c.Group is null ? "" : $" within {c.Group}")} have a consistency ratio of {c.Report.Ratio:0.000}, above {c.Report.Threshold:0.00}."));
         }
 
         return new LockCheck(blocking, errors, warnings, consistency);

@@ -21,30 +21,16 @@ public static class WeightsFeedbackBuilder
             .Concat(plan.Criteria.Where(c => c.Kind != CriterionKind.Gate).Select(c => new WeightNodeView(c.Id, c.Name, "criterion", c.Group)))
             .ToArray();
 
-    /// <summary>The pairwise matrices: the top level (groups and top-level criteria), then one per group.</summary>
-    public static IReadOnlyList<(string? Group, string[] Items)> Matrices(Evaluation plan)
-    {
-        var scored = plan.Criteria.Where(c => c.Kind != CriterionKind.Gate).ToArray();
-        var result = new List<(string?, string[])>
-        {
-            (null, plan.Groups.Select(g => g.Id).Concat(scored.Where(c => c.Group is null).Select(c => c.Id)).ToArray()),
-        };
-        result.AddRange(plan.Groups.Select(g => ((string?)g.Id, scored.Where(c => c.Group == g.Id).Select(c => c.Id).ToArray())));
-        return result;
-    }
-
     /// <summary>The value a stored pairwise judgement stands for.</summary>
     public static Tfn ValueOf(Evaluation plan, WeightJudgement j) =>
-        j.Term is { } term && plan.PairwiseScale.TryFind(term, out var step)
-            ? plan.PairwiseScale[step].Value
-            : new Tfn(j.Lower ?? 1, j.Middle ?? 1, j.Upper ?? 1);
+        WeightStructure.PairwiseValue(plan, j.Term, j.Lower, j.Middle, j.Upper);
 
     public static WeightsFeedback Build(Evaluation plan, string assessor, IReadOnlyList<WeightJudgement> judgements) =>
         plan.Weighting == WeightingMethod.Importance ? Importance(plan, judgements) : Pairwise(plan, assessor, judgements);
 
     private static WeightsFeedback Importance(Evaluation plan, IReadOnlyList<WeightJudgement> judgements)
     {
-        var given = judgements.Where(j => j.Kind == "importance").Select(j => j.Node).ToHashSet(StringComparer.Ordinal);
+        var given = judgements.Where(j => j.Kind == WeightJudgement.ImportanceKind).Select(j => j.Node).ToHashSet(StringComparer.Ordinal);
         var missing = Nodes(plan).Select(n => n.Id).Where(n => !given.Contains(n)).ToArray();
         var warnings = missing.Length == 0 ? Array.Empty<string>() : [$"Still to rate: {string.Join(", ", missing)}."];
         return new WeightsFeedback(missing.Length == 0, missing, [], warnings);
@@ -52,10 +38,10 @@ public static class WeightsFeedbackBuilder
 
     private static WeightsFeedback Pairwise(Evaluation plan, string assessor, IReadOnlyList<WeightJudgement> judgements)
     {
-        var pairwise = judgements.Where(j => j.Kind == "pairwise").ToArray();
+        var pairwise = judgements.Where(j => j.Kind == WeightJudgement.PairwiseKind).ToArray();
         var matrices = new List<MatrixFeedback>();
         var warnings = new List<string>();
-        foreach (var (group, items) in Matrices(plan).Where(m => m.Items.Length >= 2))
+        foreach (var (group, items) in WeightStructure.Matrices(plan).Where(m => m.Items.Count >= 2))
         {
             var feedback = Matrix(plan, assessor, group, items, pairwise);
             matrices.Add(feedback);
@@ -78,7 +64,7 @@ public static class WeightsFeedbackBuilder
         return new WeightsFeedback(matrices.All(m => m.Complete), [], matrices, warnings);
     }
 
-    private static MatrixFeedback Matrix(Evaluation plan, string assessor, string? group, string[] items, IReadOnlyList<WeightJudgement> judgements)
+    private static MatrixFeedback Matrix(Evaluation plan, string assessor, string? group, IReadOnlyList<string> items, IReadOnlyList<WeightJudgement> judgements)
     {
         var position = items.Select((id, i) => (id, i)).ToDictionary(x => x.id, x => x.i, StringComparer.Ordinal);
         var matrix = new FuzzyPairwiseMatrix(items);
@@ -93,9 +79,9 @@ public static class WeightsFeedbackBuilder
         }
 
         var missing = new List<string[]>();
-        for (var i = 0; i < items.Length; i++)
+        for (var i = 0; i < items.Count; i++)
         {
-            for (var k = i + 1; k < items.Length; k++)
+            for (var k = i + 1; k < items.Count; k++)
             {
                 if (!judged.Contains((i, k)))
                 {
@@ -104,7 +90,7 @@ public static class WeightsFeedbackBuilder
             }
         }
 
-        var n = items.Length;
+        var n = items.Count;
         var threshold = RandomIndex.Threshold(n);
         var gciThreshold = RandomIndex.GciThreshold(n);
 

@@ -1,4 +1,5 @@
 using System.Globalization;
+using Decide.Core.Weighting;
 using Decide.Core;
 using Decide.Core.Model;
 using Decide.Core.Scales;
@@ -20,8 +21,8 @@ public sealed class WeightsService(
     AuditWriter audit,
     TimeProvider clock)
 {
-    private const string ImportanceKind = "importance";
-    private const string PairwiseKind = "pairwise";
+    private const string ImportanceKind = WeightJudgement.ImportanceKind;
+    private const string PairwiseKind = WeightJudgement.PairwiseKind;
 
     public async Task<WeightsView> GetAsync(Guid id, CancellationToken ct = default)
     {
@@ -201,7 +202,7 @@ public sealed class WeightsService(
         }
 
         var matrixOf = new Dictionary<string, string>(StringComparer.Ordinal);
-        foreach (var (group, items) in WeightsFeedbackBuilder.Matrices(plan))
+        foreach (var (group, items) in WeightStructure.Matrices(plan))
         {
             foreach (var item in items)
             {

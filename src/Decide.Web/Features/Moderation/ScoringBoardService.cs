@@ -35,7 +35,7 @@ public sealed class ScoringBoardService(IDbContextFactory<DecideDbContext> facto
         var values = await db.NumericValues.AsNoTracking().Where(v => v.EvaluationId == id)
             .Select(v => new { v.AlternativeCode, v.CriterionId }).ToListAsync(ct);
         var judgements = plan.Weighting == WeightingMethod.Pairwise
-            ? await db.WeightJudgements.AsNoTracking().Where(w => w.EvaluationId == id && w.Kind == "pairwise").OrderBy(w => w.Id).ToListAsync(ct)
+            ? await db.WeightJudgements.AsNoTracking().Where(w => w.EvaluationId == id && w.Kind == WeightJudgement.PairwiseKind).OrderBy(w => w.Id).ToListAsync(ct)
             : [];
         var userIds = m.Evaluation.Panel.Select(p => p.UserId).Distinct().ToArray();
         var names = await db.Users.AsNoTracking().Where(u => userIds.Contains(u.Id)).ToDictionaryAsync(u => u.Id, u => u.DisplayName, ct);
@@ -47,7 +47,7 @@ public sealed class ScoringBoardService(IDbContextFactory<DecideDbContext> facto
             var assigned = (EvaluationComposer.Assigned(seat) ?? linguistic).Where(linguistic.Contains).ToHashSet(StringComparer.Ordinal);
             var ratingsDone = done.Count(r => r.AssessorCode == code && scored.Contains(r.AlternativeCode) && assigned.Contains(r.CriterionId));
             var matrices = plan.Weighting == WeightingMethod.Pairwise
-                ? Matrices(plan).Select(x => Consistency(plan, x.Group, x.Items, judgements.Where(j => j.AssessorCode == code))).ToArray()
+                ? WeightStructure.Matrices(plan).Select(x => Consistency(plan, x.Group, x.Items, judgements.Where(j => j.AssessorCode == code))).ToArray()
                 : null;
             assessors.Add(new AssessorProgress(
                 code, names.GetValueOrDefault(seat.UserId, code), seat.DeclarationSignedAt, seat.DeclarationVersion, seat.NamesConfirmedAt,
@@ -63,20 +63,9 @@ public sealed class ScoringBoardService(IDbContextFactory<DecideDbContext> facto
         return new ScoringBoard(id, m.Evaluation.Stage, plan.Weighting, scored.Count, assessors, price);
     }
 
-    /// <summary>The pairwise matrices of the plan: the top level (groups and ungrouped criteria), then one per group.</summary>
-    private static IEnumerable<(string? Group, string[] Items)> Matrices(Evaluation plan)
+    private static MatrixProgress Consistency(Evaluation plan, string? group, IReadOnlyList<string> items, IEnumerable<WeightJudgement> judgements)
     {
-        var scored = plan.Criteria.Where(c => c.Kind != CriterionKind.Gate).ToArray();
-        yield return (null, plan.Groups.Select(g => g.Id).Concat(scored.Where(c => c.Group is null).Select(c => c.Id)).ToArray());
-        foreach (var group in plan.Groups)
-        {
-            yield return (group.Id, scored.Where(c => c.Group == group.Id).Select(c => c.Id).ToArray());
-        }
-    }
-
-    private static MatrixProgress Consistency(Evaluation plan, string? group, string[] items, IEnumerable<WeightJudgement> judgements)
-    {
-        var needed = items.Length * (items.Length - 1) / 2;
+        var needed = items.Count * (items.Count - 1) / 2;
         var position = items.Select((item, i) => (item, i)).ToDictionary(x => x.item, x => x.i, StringComparer.Ordinal);
         var matrix = new FuzzyPairwiseMatrix(items);
         var pairs = new HashSet<(int, int)>();
