@@ -73,9 +73,9 @@ public sealed class LoadPanel
             seats = assessors.Select(a => new { email = a.Item2, role = "assessor", assessorCode = a.Item1 }).ToArray(),
             version = await panel.VersionAsync(ct),
         }, "setting the panel", ct);
-        await Api.PutAsync(facilitator, panel.Url("/alternatives"), new
+        await Api.PutAsync(facilitator, panel.Url("/bids"), new
         {
-            alternatives = Bids.Select(b => new { code = b, name = Name(b) + " Grounds Ltd" }).ToArray(),
+            bids = Bids.Select(b => new { code = b, name = Name(b) + " Grounds Ltd" }).ToArray(),
             version = await panel.VersionAsync(ct),
         }, "registering the bids", ct);
 

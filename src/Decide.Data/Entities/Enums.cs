@@ -1,6 +1,6 @@
 namespace Decide.Data.Entities;
 
-/// <summary>Where an evaluation is in its life. Transitions only go forward (the rules: Decide.Web, Features/Evaluations/EvaluationService).</summary>
+/// <summary>Where an evaluation is in its life. Stages only go forward; what each allows is in <see cref="StageRules"/>.</summary>
 public enum EvaluationStage
 {
     /// <summary>The facilitator prepares the plan; weight judgements are collected.</summary>

@@ -16,7 +16,8 @@ public sealed class StoredEvaluation : IVersioned
 
     public string? Organisation { get; set; }
 
-    public EvaluationStage Stage { get; set; }
+    /// <summary>Where the evaluation is; it moves only by the methods below, as <see cref="StageRules"/> allow.</summary>
+    public EvaluationStage Stage { get; private set; }
 
     /// <summary>1 for the first revision; a new revision copies the plan and links back.</summary>
     public int Revision { get; set; } = 1;
@@ -25,13 +26,13 @@ public sealed class StoredEvaluation : IVersioned
 
     public string? RevisionReason { get; set; }
 
-    public Guid? SupersededById { get; set; }
+    public Guid? SupersededById { get; private set; }
 
     /// <summary>The plan as a decide-evaluation/1 document (no panel, alternatives or inputs).</summary>
     public string PlanJson { get; set; } = "{}";
 
     /// <summary>SHA-256 (hex) of <see cref="PlanJson"/> when the plan was locked.</summary>
-    public string? PlanHash { get; set; }
+    public string? PlanHash { get; private set; }
 
     /// <summary>Shortest rationale accepted with a rating, in characters.</summary>
     public int MinRationaleLength { get; set; } = 20;
@@ -46,13 +47,13 @@ public sealed class StoredEvaluation : IVersioned
 
     public string CreatedBy { get; set; } = "";
 
-    public DateTimeOffset? PlanLockedAt { get; set; }
+    public DateTimeOffset? PlanLockedAt { get; private set; }
 
-    public DateTimeOffset? ScoringOpenedAt { get; set; }
+    public DateTimeOffset? ScoringOpenedAt { get; private set; }
 
-    public DateTimeOffset? ModerationStartedAt { get; set; }
+    public DateTimeOffset? ModerationStartedAt { get; private set; }
 
-    public DateTimeOffset? SignedOffAt { get; set; }
+    public DateTimeOffset? SignedOffAt { get; private set; }
 
     /// <summary>When the facilitator asked the approvers to sign off; approvals are accepted only after that.</summary>
     public DateTimeOffset? SignOffRequestedAt { get; set; }
@@ -77,4 +78,55 @@ public sealed class StoredEvaluation : IVersioned
     public List<PanelMember> Panel { get; set; } = [];
 
     public List<StoredAlternative> Alternatives { get; set; } = [];
+
+    /// <summary>Setup → plan locked: the plan is frozen with its SHA-256.</summary>
+    /// <exception cref="StageRefusedException">The evaluation is not at setup.</exception>
+    public void LockPlan(DateTimeOffset at, string planHash)
+    {
+        Move(StageRules.LockPlan, EvaluationStage.PlanLocked);
+        PlanLockedAt = at;
+        PlanHash = planHash;
+    }
+
+    /// <summary>Plan locked → scoring.</summary>
+    /// <exception cref="StageRefusedException">The plan is not locked, or scoring is already open.</exception>
+    public void OpenScoring(DateTimeOffset at)
+    {
+        Move(StageRules.OpenScoring, EvaluationStage.Scoring);
+        ScoringOpenedAt = at;
+    }
+
+    /// <summary>Scoring → moderation.</summary>
+    /// <exception cref="StageRefusedException">The evaluation is not at scoring.</exception>
+    public void StartModeration(DateTimeOffset at)
+    {
+        Move(StageRules.StartModeration, EvaluationStage.Moderation);
+        ModerationStartedAt = at;
+    }
+
+    /// <summary>Moderation → signed off (read-only from then on).</summary>
+    /// <exception cref="StageRefusedException">The evaluation is not at moderation.</exception>
+    public void SignOff(DateTimeOffset at)
+    {
+        Move(StageRules.SignOff, EvaluationStage.SignedOff);
+        SignedOffAt = at;
+    }
+
+    /// <summary>This revision is replaced by <paramref name="next"/> and kept, read-only, for the record.</summary>
+    /// <exception cref="StageRefusedException">The evaluation is still at setup (edit it instead) or already superseded.</exception>
+    public void SupersedeBy(Guid next)
+    {
+        Move(StageRules.OpenRevision, EvaluationStage.Superseded);
+        SupersededById = next;
+    }
+
+    private void Move(StageRule rule, EvaluationStage to)
+    {
+        if (!rule.AllowsAt(Stage))
+        {
+            throw new StageRefusedException(rule.Refusal(Reference, Stage));
+        }
+
+        Stage = to;
+    }
 }

@@ -15,7 +15,7 @@ public static class EvaluationEndpoints
         group.MapGet("/{id:guid}/setup", Setup).WithSummary("The seats with e-mail addresses and what stops the plan from being locked (facilitator).");
         group.MapPut("/{id:guid}/plan", UpdatePlan).WithSummary("Replace the plan (facilitator, setup only).");
         group.MapPut("/{id:guid}/panel", UpdatePanel).WithSummary("Replace the panel's seats (facilitator, setup only).");
-        group.MapPut("/{id:guid}/alternatives", UpdateAlternatives).WithSummary("Replace the list of bids (facilitator, before scoring).");
+        group.MapPut("/{id:guid}/bids", UpdateBids).WithSummary("Replace the list of bids (facilitator, before scoring).");
         group.MapPost("/{id:guid}/lock-plan", LockPlan).WithSummary("Freeze the plan and the weights (facilitator).");
         group.MapPost("/{id:guid}/open-scoring", OpenScoring).WithSummary("Open scoring (facilitator).");
         group.MapPost("/{id:guid}/start-moderation", StartModeration).WithSummary("Close scoring and start moderation (facilitator).");
@@ -45,24 +45,24 @@ public static class EvaluationEndpoints
     private static async Task<Ok<EvaluationSummary>> UpdatePanel(Guid id, UpdatePanelRequest request, EvaluationService service, CancellationToken ct) =>
         TypedResults.Ok(await service.UpdatePanelAsync(id, request, ct));
 
-    private static async Task<Ok<EvaluationSummary>> UpdateAlternatives(Guid id, UpdateAlternativesRequest request, EvaluationService service, CancellationToken ct) =>
-        TypedResults.Ok(await service.UpdateAlternativesAsync(id, request, ct));
+    private static async Task<Ok<EvaluationSummary>> UpdateBids(Guid id, UpdateBidsRequest request, EvaluationService service, CancellationToken ct) =>
+        TypedResults.Ok(await service.UpdateBidsAsync(id, request, ct));
 
-    private static async Task<Ok<TransitionResult>> LockPlan(Guid id, TransitionRequest request, EvaluationService service, CancellationToken ct) =>
+    private static async Task<Ok<TransitionResult>> LockPlan(Guid id, TransitionRequest request, EvaluationLifecycleService service, CancellationToken ct) =>
         TypedResults.Ok(await service.LockPlanAsync(id, request, ct));
 
-    private static async Task<Ok<TransitionResult>> OpenScoring(Guid id, TransitionRequest request, EvaluationService service, CancellationToken ct) =>
+    private static async Task<Ok<TransitionResult>> OpenScoring(Guid id, TransitionRequest request, EvaluationLifecycleService service, CancellationToken ct) =>
         TypedResults.Ok(await service.OpenScoringAsync(id, request, ct));
 
-    private static async Task<Ok<TransitionResult>> StartModeration(Guid id, TransitionRequest request, EvaluationService service, CancellationToken ct) =>
+    private static async Task<Ok<TransitionResult>> StartModeration(Guid id, TransitionRequest request, EvaluationLifecycleService service, CancellationToken ct) =>
         TypedResults.Ok(await service.StartModerationAsync(id, request, ct));
 
-    private static async Task<Created<EvaluationSummary>> NewRevision(Guid id, RevisionRequest request, EvaluationService service, CancellationToken ct)
+    private static async Task<Created<EvaluationSummary>> NewRevision(Guid id, RevisionRequest request, EvaluationLifecycleService service, CancellationToken ct)
     {
         var next = await service.NewRevisionAsync(id, request, ct);
         return TypedResults.Created($"/api/evaluations/{next.Id}", next);
     }
 
-    private static async Task<Ok<EvaluationSummary>> LegalHold(Guid id, LegalHoldRequest request, EvaluationService service, CancellationToken ct) =>
+    private static async Task<Ok<EvaluationSummary>> LegalHold(Guid id, LegalHoldRequest request, EvaluationLifecycleService service, CancellationToken ct) =>
         TypedResults.Ok(await service.SetLegalHoldAsync(id, request, ct));
 }

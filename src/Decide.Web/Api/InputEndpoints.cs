@@ -31,16 +31,16 @@ public static class InputEndpoints
 
         var sheet = group.MapGroup("/my").WithTags("Rating sheet");
         sheet.MapGet("/sheet", Sheet).WithSummary("The caller's rating sheet: bids × assigned criteria, own cells only, progress (assessor).");
-        sheet.MapPut("/ratings/{alternative}/{criterion}", Rate).WithSummary("Rate one cell with a term and rationale, or decline it with a reason (assessor, scoring).");
+        sheet.MapPut("/ratings/{bid}/{criterion}", Rate).WithSummary("Rate one cell with a term and rationale, or decline it with a reason (assessor, scoring).");
         sheet.MapPost("/submit", SubmitSheet).WithSummary("Submit the rating sheet; refused, listing every missing cell, while incomplete (assessor).");
 
         var values = group.MapGroup("/values").WithTags("Numeric values");
         values.MapGet("/", Values).WithSummary("Values of the numeric criteria (price evaluator, facilitator, observer, approver; assessors only if prices are visible to them).");
-        values.MapPut("/{alternative}/{criterion}", PutValue).WithSummary("Enter one numeric value (price evaluator, scoring).");
+        values.MapPut("/{bid}/{criterion}", PutValue).WithSummary("Enter one numeric value (price evaluator, scoring).");
 
         var gates = group.MapGroup("/gates").WithTags("Gates");
         gates.MapGet("/", Gates).WithSummary("Pass/fail results of the gate criteria.");
-        gates.MapPut("/{alternative}/{criterion}", PutGate).WithSummary("Record one gate result; a fail needs a note (facilitator, plan locked or scoring).");
+        gates.MapPut("/{bid}/{criterion}", PutGate).WithSummary("Record one gate result; a fail needs a note (facilitator, plan locked or scoring).");
         return api;
     }
 
@@ -73,8 +73,8 @@ public static class InputEndpoints
     private static async Task<Ok<RatingSheetView>> Sheet(Guid id, RatingSheetService service, CancellationToken ct) =>
         TypedResults.Ok(await service.GetAsync(id, ct));
 
-    private static async Task<Ok<SheetCell>> Rate(Guid id, string alternative, string criterion, RatingRequest request, RatingSheetService service, CancellationToken ct) =>
-        TypedResults.Ok(await service.SaveAsync(id, alternative, criterion, request, ct));
+    private static async Task<Ok<SheetCell>> Rate(Guid id, string bid, string criterion, RatingRequest request, RatingSheetService service, CancellationToken ct) =>
+        TypedResults.Ok(await service.SaveAsync(id, bid, criterion, request, ct));
 
     private static async Task<Ok<RatingSheetView>> SubmitSheet(Guid id, RatingSheetService service, CancellationToken ct) =>
         TypedResults.Ok(await service.SubmitAsync(id, ct));
@@ -82,12 +82,12 @@ public static class InputEndpoints
     private static async Task<Ok<ValuesView>> Values(Guid id, NumericValueService service, CancellationToken ct) =>
         TypedResults.Ok(await service.GetAsync(id, ct));
 
-    private static async Task<Ok<ValueCell>> PutValue(Guid id, string alternative, string criterion, ValueRequest request, NumericValueService service, CancellationToken ct) =>
-        TypedResults.Ok(await service.SaveAsync(id, alternative, criterion, request, ct));
+    private static async Task<Ok<ValueCell>> PutValue(Guid id, string bid, string criterion, ValueRequest request, NumericValueService service, CancellationToken ct) =>
+        TypedResults.Ok(await service.SaveAsync(id, bid, criterion, request, ct));
 
     private static async Task<Ok<GatesView>> Gates(Guid id, GateService service, CancellationToken ct) =>
         TypedResults.Ok(await service.GetAsync(id, ct));
 
-    private static async Task<Ok<GateCell>> PutGate(Guid id, string alternative, string criterion, GateRequest request, GateService service, CancellationToken ct) =>
-        TypedResults.Ok(await service.SaveAsync(id, alternative, criterion, request, ct));
+    private static async Task<Ok<GateCell>> PutGate(Guid id, string bid, string criterion, GateRequest request, GateService service, CancellationToken ct) =>
+        TypedResults.Ok(await service.SaveAsync(id, bid, criterion, request, ct));
 }

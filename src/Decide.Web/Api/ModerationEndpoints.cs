@@ -13,7 +13,7 @@ public static class ModerationEndpoints
             .WithSummary("The scoring board: declarations, weights, consistency, ratings done and submissions per seat; never the ratings (facilitator, observer).");
         group.MapGet("/moderation", Board)
             .WithSummary("Every cell with the assessors' ratings side by side, its spread and moderated values; flagged cells first (panel, from moderation on).");
-        group.MapPut("/moderation/{alternative}/{criterion}", Moderate)
+        group.MapPut("/moderation/{bid}/{criterion}", Moderate)
             .WithSummary("Record the value the panel agreed for a cell, with the reason (a minute a bidder may read); the original ratings stay (facilitator, moderation).");
         group.MapPost("/sheets/{assessorCode}/reopen", Reopen)
             .WithSummary("Reopen an assessor's submitted rating sheet, with the reason (facilitator, scoring or moderation).");
@@ -27,8 +27,8 @@ public static class ModerationEndpoints
         TypedResults.Ok(await service.GetAsync(id, ct));
 
     private static async Task<Ok<ModeratedValue>> Moderate(
-        Guid id, string alternative, string criterion, ModerateRequest request, ModerationService service, CancellationToken ct) =>
-        TypedResults.Ok(await service.ModerateAsync(id, alternative, criterion, request, ct));
+        Guid id, string bid, string criterion, ModerateRequest request, ModerationService service, CancellationToken ct) =>
+        TypedResults.Ok(await service.ModerateAsync(id, bid, criterion, request, ct));
 
     private static async Task<Ok<SheetState>> Reopen(Guid id, string assessorCode, ReopenSheetRequest request, ModerationService service, CancellationToken ct) =>
         TypedResults.Ok(await service.ReopenSheetAsync(id, assessorCode, request, ct));

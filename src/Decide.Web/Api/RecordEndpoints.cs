@@ -17,7 +17,7 @@ public static class RecordEndpoints
             .WithSummary("Documents archived for the evaluation: the signed record and feedback letters (facilitator, observer, approver).");
         group.MapGet("/evaluations/{id:guid}/record", Record)
             .WithSummary("The signed evaluation record as PDF, with the evaluation file embedded (facilitator, observer, approver; after sign-off).");
-        group.MapGet("/evaluations/{id:guid}/feedback/{alternative}", Feedback)
+        group.MapGet("/evaluations/{id:guid}/feedback/{bid}", Feedback)
             .WithSummary("A feedback letter for one bidder as PDF: its scores and the winner's, with the panel's reasons, nothing about other bidders (facilitator; after sign-off).");
         group.MapPost("/records/verification", Verify)
             .WithMetadata(new RequestSizeLimitAttribute(RequestLimits.MaxRecordBytes))
@@ -34,9 +34,9 @@ public static class RecordEndpoints
         return TypedResults.File(file.Content, Pdf, file.FileName);
     }
 
-    private static async Task<FileContentHttpResult> Feedback(Guid id, string alternative, RecordService records, CancellationToken ct)
+    private static async Task<FileContentHttpResult> Feedback(Guid id, string bid, RecordService records, CancellationToken ct)
     {
-        var file = await records.GetFeedbackAsync(id, alternative, ct);
+        var file = await records.GetFeedbackAsync(id, bid, ct);
         return TypedResults.File(file.Content, Pdf, file.FileName);
     }
 

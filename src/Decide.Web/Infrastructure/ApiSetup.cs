@@ -50,6 +50,8 @@ public static class ApiSetup
         services.AddScoped<AuditWriter>();
         services.AddScoped<EvaluationAccess>();
         services.AddScoped<EvaluationService>();
+        services.AddScoped<EvaluationLifecycleService>();
+        services.AddScoped<PlanLockCheck>();
         services.AddScoped<AuditService>();
         services.AddScoped<EvaluationComposer>();
         services.AddScoped<AccountService>();

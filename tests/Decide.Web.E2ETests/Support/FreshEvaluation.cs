@@ -56,9 +56,9 @@ public sealed class FreshEvaluation
             seats = new object[] { new { email, role = "assessor", assessorCode = "harrow" } },
             version = await evaluation.VersionAsync(f),
         }));
-        await OkAsync(await f.PutAsJsonAsync(evaluation.Url("/alternatives"), new
+        await OkAsync(await f.PutAsJsonAsync(evaluation.Url("/bids"), new
         {
-            alternatives = Bidders.Select(b => new { code = b.Code, name = b.Name }).ToArray(),
+            bids = Bidders.Select(b => new { code = b.Code, name = b.Name }).ToArray(),
             version = await evaluation.VersionAsync(f),
         }));
         return evaluation;

@@ -40,7 +40,7 @@ public sealed class AuthorisationMatrixTests(AuthorisationFixture fixture) : ICl
         ["GET /api/evaluations/{id:guid}/setup"] = "1433A333",
         ["PUT /api/evaluations/{id:guid}/plan"] = "1433A333",
         ["PUT /api/evaluations/{id:guid}/panel"] = "1433A333",
-        ["PUT /api/evaluations/{id:guid}/alternatives"] = "1433A333",
+        ["PUT /api/evaluations/{id:guid}/bids"] = "1433A333",
         ["POST /api/evaluations/{id:guid}/lock-plan"] = "1433A333",
         ["POST /api/evaluations/{id:guid}/open-scoring"] = "1433A333",
         ["POST /api/evaluations/{id:guid}/start-moderation"] = "1433A333",
@@ -62,16 +62,16 @@ public sealed class AuthorisationMatrixTests(AuthorisationFixture fixture) : ICl
         ["PUT /api/evaluations/{id:guid}/my/weights/"] = "14AA3333",
         ["POST /api/evaluations/{id:guid}/my/weights/submit"] = "14AA3333",
         ["GET /api/evaluations/{id:guid}/my/sheet"] = "14AA3333",
-        ["PUT /api/evaluations/{id:guid}/my/ratings/{alternative}/{criterion}"] = "14AA3333",
+        ["PUT /api/evaluations/{id:guid}/my/ratings/{bid}/{criterion}"] = "14AA3333",
         ["POST /api/evaluations/{id:guid}/my/submit"] = "14AA3333",
         ["GET /api/evaluations/{id:guid}/values/"] = "143AAAA3",
-        ["PUT /api/evaluations/{id:guid}/values/{alternative}/{criterion}"] = "143A3333",
+        ["PUT /api/evaluations/{id:guid}/values/{bid}/{criterion}"] = "143A3333",
         ["GET /api/evaluations/{id:guid}/gates/"] = "14AAAAA3",
-        ["PUT /api/evaluations/{id:guid}/gates/{alternative}/{criterion}"] = "1433A333",
+        ["PUT /api/evaluations/{id:guid}/gates/{bid}/{criterion}"] = "1433A333",
 
         ["GET /api/evaluations/{id:guid}/progress"] = "1433AA33",
         ["GET /api/evaluations/{id:guid}/moderation"] = "14AAAAA3",
-        ["PUT /api/evaluations/{id:guid}/moderation/{alternative}/{criterion}"] = "1433A333",
+        ["PUT /api/evaluations/{id:guid}/moderation/{bid}/{criterion}"] = "1433A333",
         ["POST /api/evaluations/{id:guid}/sheets/{assessorCode}/reopen"] = "1433A333",
         ["GET /api/evaluations/{id:guid}/results"] = "14AAAAA3",
 
@@ -86,7 +86,7 @@ public sealed class AuthorisationMatrixTests(AuthorisationFixture fixture) : ICl
         ["POST /api/evaluations/{id:guid}/approvals/request"] = "1433A333",
         ["GET /api/evaluations/{id:guid}/records"] = "1433AAA3",
         ["GET /api/evaluations/{id:guid}/record"] = "1433AAA3",
-        ["GET /api/evaluations/{id:guid}/feedback/{alternative}"] = "1433A333",
+        ["GET /api/evaluations/{id:guid}/feedback/{bid}"] = "1433A333",
         // Anyone signed in may check a record they hold; the answer names only what the file itself says.
         ["POST /api/records/verification"] = "1AAAAAAA",
     };
@@ -224,7 +224,7 @@ public sealed class AuthorisationMatrixTests(AuthorisationFixture fixture) : ICl
     private static Task<HttpResponseMessage> SendAsync(HttpClient client, string endpoint, Guid id)
     {
         var (method, pattern) = (endpoint[..endpoint.IndexOf(' ')], endpoint[(endpoint.IndexOf(' ') + 1)..]);
-        var url = pattern.Replace("{id:guid}", id.ToString()).Replace("{alternative}", "orrinford").Replace("{criterion}", "display")
+        var url = pattern.Replace("{id:guid}", id.ToString()).Replace("{bid}", "orrinford").Replace("{criterion}", "display")
             .Replace("{assessorCode}", "ravelle");
         var request = new HttpRequestMessage(new HttpMethod(method), url);
         if (method != "GET")

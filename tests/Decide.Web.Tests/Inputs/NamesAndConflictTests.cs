@@ -15,7 +15,7 @@ public sealed class NamesAndConflictTests(DecideWebFactory factory) : IClassFixt
     {
         using var s = await new ScenarioBuilder(factory).BuildAsync(EvaluationStage.Scoring);
 
-        Assert.Equal(JsonValueKind.Null, (await s.DetailAsync(s.Ashby)).GetProperty("alternatives").ValueKind);
+        Assert.Equal(JsonValueKind.Null, (await s.DetailAsync(s.Ashby)).GetProperty("bids").ValueKind);
         await ApiAssert.ProblemAsync(await s.Ashby.GetAsync(s.Url("/my/sheet")), HttpStatusCode.Forbidden, "stay hidden until you confirm your declaration");
         await ApiAssert.ProblemAsync(await s.Carrow.GetAsync(s.Url("/values")), HttpStatusCode.Forbidden, "stay hidden until you confirm your declaration");
 
@@ -25,7 +25,7 @@ public sealed class NamesAndConflictTests(DecideWebFactory factory) : IClassFixt
         Assert.Equal(Bidders.Select(b => b.Code), mine.GetProperty("bidders").EnumerateArray().Select(b => b.GetProperty("code").GetString()));
 
         await s.ConfirmNamesAsync(s.Ashby);
-        Assert.Equal(Bidders.Length, (await s.DetailAsync(s.Ashby)).GetProperty("alternatives").GetArrayLength());
+        Assert.Equal(Bidders.Length, (await s.DetailAsync(s.Ashby)).GetProperty("bids").GetArrayLength());
         await ApiAssert.OkAsync(await s.Ashby.GetAsync(s.Url("/my/sheet")));
         var entry = Assert.Single(await s.AuditEntriesAsync("declaration.names-confirmed"));
         Assert.Contains("no conflict of interest declared", entry.GetProperty("newValue").GetString());

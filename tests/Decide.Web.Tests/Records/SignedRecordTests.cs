@@ -113,7 +113,7 @@ public sealed class SignedRecordTests(DecideWebFactory factory) : IClassFixture<
         var id = await SignedOffAsync();
         using var facilitator = await factory.SignInAsync(EvaluationCopies.CopyFacilitator);
         var detail = await facilitator.GetFromJsonAsync<JsonElement>($"/api/evaluations/{id}");
-        var bids = detail.GetProperty("alternatives").EnumerateArray()
+        var bids = detail.GetProperty("bids").EnumerateArray()
             .Select(a => (Code: a.GetProperty("code").GetString()!, Name: a.GetProperty("name").GetString()!)).ToArray();
         var results = await facilitator.GetFromJsonAsync<JsonElement>($"/api/evaluations/{id}/results?draws=0");
         var winner = results.GetProperty("ranking")[0].GetProperty("alternative").GetString();

@@ -16,7 +16,7 @@ public sealed class ApiDescriptionTests(DecideWebFactory factory) : IClassFixtur
         {
             ("/api/evaluations/{id}/progress", "get"),
             ("/api/evaluations/{id}/moderation", "get"),
-            ("/api/evaluations/{id}/moderation/{alternative}/{criterion}", "put"),
+            ("/api/evaluations/{id}/moderation/{bid}/{criterion}", "put"),
             ("/api/evaluations/{id}/sheets/{assessorCode}/reopen", "post"),
             ("/api/evaluations/{id}/results", "get"),
             ("/api/evaluations/{id}/export", "get"),

@@ -93,11 +93,11 @@ public sealed class ResultsTests(DecideWebFactory factory) : IClassFixture<Decid
         var locked = await client.PostAsJsonAsync($"/api/evaluations/{id}/lock-plan", new { version = detail.GetProperty("summary").GetProperty("version").GetInt64() });
         Assert.Equal(HttpStatusCode.OK, locked.StatusCode);
         detail = await client.GetFromJsonAsync<JsonElement>($"/api/evaluations/{id}");
-        var alternatives = detail.GetProperty("alternatives").EnumerateArray()
+        var alternatives = detail.GetProperty("bids").EnumerateArray()
             .Select(a => new { code = a.GetProperty("code").GetString(), name = a.GetProperty("name").GetString() })
             .Append(new { code = (string?)"latecomer", name = (string?)"Latecomer Displays" }).ToArray();
-        var put = await client.PutAsJsonAsync($"/api/evaluations/{id}/alternatives",
-            new { alternatives, version = detail.GetProperty("summary").GetProperty("version").GetInt64() });
+        var put = await client.PutAsJsonAsync($"/api/evaluations/{id}/bids",
+            new { bids = alternatives, version = detail.GetProperty("summary").GetProperty("version").GetInt64() });
         Assert.Equal(HttpStatusCode.OK, put.StatusCode);
         detail = await client.GetFromJsonAsync<JsonElement>($"/api/evaluations/{id}");
         var opened = await client.PostAsJsonAsync($"/api/evaluations/{id}/open-scoring", new { version = detail.GetProperty("summary").GetProperty("version").GetInt64() });

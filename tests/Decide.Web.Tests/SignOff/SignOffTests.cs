@@ -135,7 +135,7 @@ public sealed class SignOffTests(DecideWebFactory factory) : IClassFixture<Decid
                 new { term = "G", reason = "A reason of the panel, long enough.", agreedBy = new[] { "ravelle" } })),
             ("reopen", client.PostAsJsonAsync($"/api/evaluations/{id}/sheets/ravelle/reopen", new { reason = "A reason that is long enough." })),
             ("plan", client.PutAsJsonAsync($"/api/evaluations/{id}/plan", new { plan = detail.GetProperty("plan"), version })),
-            ("bids", client.PutAsJsonAsync($"/api/evaluations/{id}/alternatives", new { alternatives = Array.Empty<object>(), version })),
+            ("bids", client.PutAsJsonAsync($"/api/evaluations/{id}/bids", new { bids = Array.Empty<object>(), version })),
             ("start moderation", client.PostAsJsonAsync($"/api/evaluations/{id}/start-moderation", new { version })),
         };
         foreach (var (what, request) in refused)

@@ -93,9 +93,9 @@ public sealed class ScenarioBuilder(IDecideHost factory)
             },
             version = await scenario.VersionAsync(),
         }));
-        await ApiAssert.OkAsync(await f.PutJsonAsync(scenario.Url("/alternatives"), new
+        await ApiAssert.OkAsync(await f.PutJsonAsync(scenario.Url("/bids"), new
         {
-            alternatives = ScenarioPlan.Bidders.Select(b => new { code = b.Code, name = b.Name }).ToArray(),
+            bids = ScenarioPlan.Bidders.Select(b => new { code = b.Code, name = b.Name }).ToArray(),
             version = await scenario.VersionAsync(),
         }));
 

@@ -63,12 +63,10 @@ public sealed class DemoSeeder(
         var now = clock.GetUtcNow();
         await using var db = await factory.CreateDbContextAsync(ct);
         var stored = EvaluationImporter.Add(db, file, accounts, facilitator.Id, admin.Id, now);
-        stored.Stage = EvaluationStage.Moderation;
         stored.CreatedAt = now.AddDays(-30);
-        stored.PlanLockedAt = now.AddDays(-20);
-        stored.ScoringOpenedAt = now.AddDays(-12);
-        stored.ModerationStartedAt = now.AddDays(-1);
-        stored.PlanHash = Convert.ToHexStringLower(SHA256.HashData(Encoding.UTF8.GetBytes(stored.PlanJson)));
+        stored.LockPlan(now.AddDays(-20), Convert.ToHexStringLower(SHA256.HashData(Encoding.UTF8.GetBytes(stored.PlanJson))));
+        stored.OpenScoring(now.AddDays(-12));
+        stored.StartModeration(now.AddDays(-1));
         stored.Panel.Add(new PanelMember { UserId = observer.Id, Role = PanelRole.Observer });
         stored.Panel.Add(new PanelMember { UserId = approver.Id, Role = PanelRole.Approver });
         var commercial = file.Evaluation.Assessors.LastOrDefault();

@@ -18,7 +18,7 @@ public sealed record EvaluationDetail(
     JsonElement? Plan,
     string? PlanHash,
     IReadOnlyList<PanelSeat> Panel,
-    IReadOnlyList<AlternativeView>? Alternatives,
+    IReadOnlyList<BidView>? Bids,
     StageDates Dates,
     Guid? PreviousRevisionId,
     string? RevisionReason,
@@ -37,8 +37,8 @@ public sealed record StageDates(
 public sealed record PanelSeat(string UserId, string DisplayName, PanelRole Role, string? AssessorCode, double Weight,
     IReadOnlyList<string>? Criteria, bool DeclarationSigned, bool Submitted);
 
-/// <summary>A bid.</summary>
-public sealed record AlternativeView(string Code, string Name);
+/// <summary>A bid: the bidder's code on this evaluation and the bidder's name (the engine and the file call it an alternative).</summary>
+public sealed record BidView(string Code, string Name);
 
 /// <summary>Replace the plan (setup only). <paramref name="Plan"/> is a decide-evaluation/1 document without panel, bids or inputs.</summary>
 public sealed record UpdatePlanRequest(JsonElement Plan, EvaluationSettings? Settings, long Version);
@@ -50,7 +50,7 @@ public sealed record UpdatePanelRequest(IReadOnlyList<SeatRequest> Seats, long V
 public sealed record SeatRequest(string Email, PanelRole Role, string? AssessorCode, double? Weight, IReadOnlyList<string>? Criteria);
 
 /// <summary>Replace the list of bids (setup or plan locked).</summary>
-public sealed record UpdateAlternativesRequest(IReadOnlyList<AlternativeView> Alternatives, long Version);
+public sealed record UpdateBidsRequest(IReadOnlyList<BidView> Bids, long Version);
 
 /// <summary>A stage change; <paramref name="Version"/> guards against acting on a stale view.</summary>
 public sealed record TransitionRequest(long Version);

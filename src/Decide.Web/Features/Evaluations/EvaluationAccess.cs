@@ -22,13 +22,12 @@ public sealed record Membership(StoredEvaluation Evaluation, IReadOnlySet<PanelR
         }
     }
 
-    /// <summary>Refuses unless the evaluation is at one of <paramref name="stages"/>.</summary>
-    public void RequireStage(string action, params EvaluationStage[] stages)
+    /// <summary>Refuses unless <paramref name="rule"/> allows its action at the evaluation's stage (<see cref="StageRules"/>).</summary>
+    public void RequireStage(StageRule rule)
     {
-        if (!stages.Contains(Evaluation.Stage))
+        if (!rule.AllowsAt(Evaluation.Stage))
         {
-            throw DomainProblem.Stage(
-                $"Cannot {action}: evaluation {Evaluation.Reference} is at stage {Evaluation.Stage}; this is possible only at {string.Join(" or ", stages)}.");
+            throw DomainProblem.Stage(rule.Refusal(Evaluation.Reference, Evaluation.Stage));
         }
     }
 }

@@ -37,7 +37,6 @@ public static class EvaluationImporter
             Reference = file.Metadata.Reference ?? "",
             Title = e.Title,
             Organisation = file.Metadata.Organisation,
-            Stage = EvaluationStage.Setup,
             PlanJson = PlanJson(file),
             CreatedAt = now,
             CreatedBy = createdBy,

@@ -179,7 +179,7 @@ public sealed partial class ExchangeService(
             audit.Record(db, stored.Id, new AuditEvent("evaluation.imported", $"evaluations/{stored.Id}", null,
                 $"{stored.Reference} · {stored.Title}; facilitator {facilitator.Email}; assessors {string.Join(", ", given.Select(x => $"{x.Key}={x.Value.Trim()}"))}; file sha256 {Sha256(raw)}"));
             await db.SaveChangesAsync(ct);
-            return EvaluationService.Summarise(stored, [.. stored.Panel.Where(p => p.UserId == user.Id).Select(p => p.Role)]);
+            return EvaluationStore.Summarise(stored, [.. stored.Panel.Where(p => p.UserId == user.Id).Select(p => p.Role)]);
         }, ct);
     }
 

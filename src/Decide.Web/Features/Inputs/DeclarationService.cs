@@ -45,7 +45,7 @@ public sealed class DeclarationService(
         {
             var x = await access.LoadAsync(db, id, ct);
             x.Membership.Require(PanelRole.Assessor, PanelRole.PriceEvaluator);
-            x.Membership.RequireStage("sign the declaration", EvaluationStage.Setup, EvaluationStage.PlanLocked, EvaluationStage.Scoring, EvaluationStage.Moderation);
+            x.Membership.RequireStage(StageRules.SignDeclaration);
             var errors = new Dictionary<string, string[]>();
             if (request.Version != Declaration.Version)
             {
@@ -93,7 +93,7 @@ public sealed class DeclarationService(
             var x = await access.LoadAsync(db, id, ct);
             x.Membership.Require(PanelRole.Assessor, PanelRole.PriceEvaluator);
             x.RequireDeclaration();
-            x.Membership.RequireStage("confirm the declaration against the bidders' names", EvaluationStage.Scoring, EvaluationStage.Moderation);
+            x.Membership.RequireStage(StageRules.ConfirmDeclaration);
             if (x.NamesConfirmed)
             {
                 throw new DomainProblem(StatusCodes.Status409Conflict, "Already confirmed",
@@ -140,7 +140,7 @@ public sealed class DeclarationService(
         {
             var x = await access.LoadAsync(db, id, ct);
             x.Membership.Require(PanelRole.Assessor, PanelRole.PriceEvaluator);
-            x.Membership.RequireStage("declare a conflict of interest", EvaluationStage.Scoring, EvaluationStage.Moderation);
+            x.Membership.RequireStage(StageRules.DeclareConflict);
             x.RequireNamesConfirmed();
             var bidders = await InputStore.BiddersAsync(db, id, ct);
             var existing = await db.Conflicts.AsNoTracking().Where(c => c.EvaluationId == id && c.UserId == user.Id).Select(c => c.AlternativeCode).ToListAsync(ct);
@@ -256,7 +256,7 @@ public sealed class DeclarationService(
         return new MyDeclarationView(
             Declaration.Version, signed ? seat.DeclarationVersion : null, signed ? seat.DeclarationSignedAt : null,
             x.NamesConfirmed ? seat.NamesConfirmedAt : null,
-            signed && !x.NamesConfirmed && x.Evaluation.Stage is EvaluationStage.Scoring or EvaluationStage.Moderation,
+            signed && !x.NamesConfirmed && StageRules.ConfirmDeclaration.AllowsAt(x.Evaluation.Stage),
             bidders, await ConflictsAsync(db, x, user.Id, ct));
     }
 

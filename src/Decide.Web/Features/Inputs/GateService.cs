@@ -37,7 +37,7 @@ public sealed class GateService(
         {
             var x = await access.LoadAsync(db, id, ct);
             x.Membership.Require(PanelRole.Facilitator);
-            x.Membership.RequireStage("record a gate result", EvaluationStage.PlanLocked, EvaluationStage.Scoring);
+            x.Membership.RequireStage(StageRules.RecordGate);
             var bidder = InputStore.Bidder(await InputStore.BiddersAsync(db, id, ct), alternative);
             var c = InputStore.Criterion(x.Plan.Evaluation, criterion);
             if (c.Kind != CriterionKind.Gate)
@@ -99,7 +99,7 @@ public sealed class GateService(
             criteria.Select(c => new GateCriterionView(c.Id, c.Name, plan.Metadata.DescriptionOf(c.Id))).ToArray(),
             bidders.Select(b => new BidderView(b.Code, b.Name)).ToArray(),
             cells,
-            x.Membership.Has(PanelRole.Facilitator) && x.Evaluation.Stage is EvaluationStage.PlanLocked or EvaluationStage.Scoring);
+            x.Membership.Has(PanelRole.Facilitator) && StageRules.RecordGate.AllowsAt(x.Evaluation.Stage));
     }
 
     private static GateCell Cell(GateEntry r, IReadOnlyDictionary<string, string> names) =>

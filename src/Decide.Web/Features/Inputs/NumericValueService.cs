@@ -36,7 +36,7 @@ public sealed class NumericValueService(
             var x = await access.LoadAsync(db, id, ct);
             x.Membership.Require(PanelRole.PriceEvaluator);
             x.RequireDeclaration();
-            x.Membership.RequireStage("enter numeric values", EvaluationStage.Scoring);
+            x.Membership.RequireStage(StageRules.EnterValues);
             x.RequireNamesConfirmed();
             var plan = x.Plan.Evaluation;
             var bidder = InputStore.Bidder(await InputStore.BiddersAsync(db, id, ct), alternative);
@@ -123,7 +123,7 @@ public sealed class NumericValueService(
             criteria.Select(c => new NumericCriterionView(c.Id, c.Name, c.Unit, FormatWords.Of(c.Direction))).ToArray(),
             bidders.Select(b => new BidderView(b.Code, b.Name)).ToArray(),
             cells,
-            x.Membership.Has(PanelRole.PriceEvaluator) && x.Evaluation.Stage == EvaluationStage.Scoring);
+            x.Membership.Has(PanelRole.PriceEvaluator) && StageRules.EnterValues.AllowsAt(x.Evaluation.Stage));
     }
 
     private static ValueCell Cell(NumericEntry r, IReadOnlyDictionary<string, string> names) =>

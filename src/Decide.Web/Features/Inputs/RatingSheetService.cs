@@ -140,14 +140,14 @@ public sealed class RatingSheetService(
             return;
         }
 
-        throw DomainProblem.Stage(seat.SubmittedAt is { } at && x.Evaluation.Stage is EvaluationStage.Scoring or EvaluationStage.Moderation
+        throw DomainProblem.Stage(seat.SubmittedAt is { } at && StageRules.Rate.AllowsAt(x.Evaluation.Stage)
             ? $"You submitted your rating sheet on {at:yyyy-MM-dd HH:mm} UTC; it is read-only unless the facilitator reopens it."
             : $"Cannot change ratings: evaluation {x.Evaluation.Reference} is at stage {x.Evaluation.Stage}; ratings are entered at Scoring (or at Moderation on a sheet the facilitator reopened).");
     }
 
     /// <summary>Scoring and not submitted, or Scoring/Moderation on a sheet the facilitator reopened (submission cleared).</summary>
     private static bool Editable(InputContext x, PanelMember seat) =>
-        seat.SubmittedAt is null && x.Evaluation.Stage is EvaluationStage.Scoring or EvaluationStage.Moderation;
+        seat.SubmittedAt is null && StageRules.Rate.AllowsAt(x.Evaluation.Stage);
 
     private static void Validate(Evaluation plan, Criterion c, RatingRequest r, int minimum)
     {

@@ -40,7 +40,7 @@ public sealed class WeightsService(
             var x = await access.LoadAsync(db, id, ct);
             var seat = x.RequireAssessor();
             x.RequireDeclaration();
-            x.Membership.RequireStage("change weight judgements (they are frozen with the plan)", EvaluationStage.Setup);
+            x.Membership.RequireStage(StageRules.ChangeWeights);
             var existing = await JudgementsAsync(db, x, seat, tracked: true, ct);
             if (request.Version is { } version && version != seat.Version)
             {
@@ -89,7 +89,7 @@ public sealed class WeightsService(
             var x = await access.LoadAsync(db, id, ct);
             var seat = x.RequireAssessor();
             x.RequireDeclaration();
-            x.Membership.RequireStage("submit weight judgements", EvaluationStage.Setup);
+            x.Membership.RequireStage(StageRules.SubmitWeights);
             if (seat.WeightsSubmittedAt is { } at)
             {
                 throw new DomainProblem(StatusCodes.Status409Conflict, "Already submitted",
@@ -141,7 +141,7 @@ public sealed class WeightsService(
                 .Select(j => new PairwiseEntry(j.Node, j.Column, j.Term, j.Term is null ? [j.Lower ?? 1, j.Middle ?? 1, j.Upper ?? 1] : null)).ToArray(),
             WeightsFeedbackBuilder.Build(plan, seat.AssessorCode!, judgements),
             seat.WeightsSubmittedAt,
-            x.Evaluation.Stage == EvaluationStage.Setup,
+            StageRules.ChangeWeights.AllowsAt(x.Evaluation.Stage),
             seat.Version);
     }
 

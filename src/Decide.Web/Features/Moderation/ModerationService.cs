@@ -111,7 +111,7 @@ public sealed class ModerationService(
         {
             var m = await access.LoadAsync(db, id, ct);
             m.Require(PanelRole.Facilitator);
-            m.RequireStage("record a moderated value", EvaluationStage.Moderation);
+            m.RequireStage(StageRules.Moderate);
 
             var plan = EvaluationComposer.ReadPlan(m.Evaluation).Evaluation;
             var target = plan.Criteria.FirstOrDefault(c => c.Id == criterion) ?? throw DomainProblem.NotFound($"Criterion \"{criterion}\"");
@@ -210,7 +210,7 @@ public sealed class ModerationService(
             audit.Record(db, id, new AuditEvent("moderation.recorded", $"moderation/{alternative}/{criterion}",
                 inForce is null ? null : $"{inForce.Term}: {inForce.Reason}",
                 $"{term}: {reason} (agreed by {string.Join(", ", agreed)}; originals {string.Join(", ", originals.Select(o => $"{o.Assessor}={o.Term ?? "declined"}"))})"));
-            await EvaluationService.SaveAsync(db, m.Evaluation, ct);
+            await EvaluationStore.SaveAsync(db, m.Evaluation, ct);
             return View(entry, new Dictionary<string, string> { [user.Id] = await DisplayNameAsync(db, user.Id, ct) });
         }, ct);
 
@@ -223,7 +223,7 @@ public sealed class ModerationService(
         {
             var m = await access.LoadAsync(db, id, ct);
             m.Require(PanelRole.Facilitator);
-            m.RequireStage("reopen a rating sheet", EvaluationStage.Scoring, EvaluationStage.Moderation);
+            m.RequireStage(StageRules.ReopenSheet);
             var reason = request.Reason?.Trim() ?? "";
             if (reason.Length is < MinReasonLength or > MaxReasonLength)
             {
@@ -241,7 +241,7 @@ public sealed class ModerationService(
             db.MarkChanged(m.Evaluation); // a reopened sheet moves the evaluation's version
             audit.Record(db, id, new AuditEvent("sheet.reopened", $"sheets/{assessorCode}",
                 $"submitted {submitted:O}", $"reopened: {reason}"));
-            await EvaluationService.SaveAsync(db, m.Evaluation, ct);
+            await EvaluationStore.SaveAsync(db, m.Evaluation, ct);
             return new SheetState(assessorCode, null, seat.Version);
         }, ct);
 
@@ -251,8 +251,7 @@ public sealed class ModerationService(
     internal static void RequireModerationReached(Membership m, string action)
     {
         var e = m.Evaluation;
-        if (e.Stage is EvaluationStage.Moderation or EvaluationStage.SignedOff
-            || (e.Stage == EvaluationStage.Superseded && e.ModerationStartedAt is not null))
+        if (StageRules.ResultsVisible(e))
         {
             return;
         }

@@ -60,7 +60,7 @@ public sealed class RecordService(
         {
             var m = await access.LoadAsync(db, id, ct);
             m.Require(PanelRole.Facilitator, PanelRole.Observer, PanelRole.Approver);
-            m.RequireStage("download the signed record", EvaluationStage.SignedOff);
+            m.RequireStage(StageRules.DownloadRecord);
         }
 
         var record = await IssueAsync(id, ct);
@@ -122,7 +122,7 @@ public sealed class RecordService(
         {
             var m = await access.LoadAsync(db, id, ct);
             m.Require(PanelRole.Facilitator);
-            m.RequireStage("write feedback letters", EvaluationStage.SignedOff);
+            m.RequireStage(StageRules.WriteFeedback);
             if (!await db.Alternatives.AnyAsync(a => a.EvaluationId == id && a.Code == alternative, ct))
             {
                 throw DomainProblem.NotFound($"Bid '{alternative}'");

@@ -62,7 +62,7 @@ public sealed class ResultsService(
         await using var db = await factory.CreateDbContextAsync(ct);
         var m = await access.LoadAsync(db, id, ct);
         RequireResultsVisible(m, "see the results");
-        return (EvaluationService.Summarise(m.Evaluation, m.Roles), await composer.ComposeAsync(db, m.Evaluation, ct));
+        return (EvaluationStore.Summarise(m.Evaluation, m.Roles), await composer.ComposeAsync(db, m.Evaluation, ct));
     }
 
     private Task AuditViewAsync(Guid id, string shown, CancellationToken ct) =>

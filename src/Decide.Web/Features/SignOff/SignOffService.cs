@@ -57,7 +57,7 @@ public sealed class SignOffService(
         {
             var m = await access.LoadAsync(db, id, ct);
             m.Require(PanelRole.Facilitator);
-            m.RequireStage("ask for sign-off", EvaluationStage.Moderation);
+            m.RequireStage(StageRules.AskSignOff);
             var e = m.Evaluation;
             if (request.Version is { } version && version != e.Version)
             {
@@ -88,7 +88,7 @@ public sealed class SignOffService(
             e.SignOffRequestNote = note;
             audit.Record(db, id, new AuditEvent("signoff.requested", $"evaluations/{id}/sign-off", null,
                 $"{note} (evaluation file sha256 {hash})"));
-            await EvaluationService.SaveAsync(db, e, ct);
+            await EvaluationStore.SaveAsync(db, e, ct);
             return await StateAsync(db, e, ct);
         }, ct);
     }
@@ -157,13 +157,12 @@ public sealed class SignOffService(
                 $"approval {count} of {m.Evaluation.RequiredApprovals}: {statement} (evaluation file sha256 {hash})"));
             if (count >= m.Evaluation.RequiredApprovals)
             {
-                m.Evaluation.Stage = EvaluationStage.SignedOff;
-                m.Evaluation.SignedOffAt = now;
+                m.Evaluation.SignOff(now);
                 audit.Record(db, id, new AuditEvent("evaluation.signed-off", $"evaluations/{id}",
                     EvaluationStage.Moderation.ToString(), $"{EvaluationStage.SignedOff} after {count} approval(s); evaluation file sha256 {hash}"));
             }
 
-            await EvaluationService.SaveAsync(db, m.Evaluation, ct);
+            await EvaluationStore.SaveAsync(db, m.Evaluation, ct);
             return await StateAsync(db, m.Evaluation, ct);
         }, ct);
 
@@ -187,7 +186,7 @@ public sealed class SignOffService(
     private async Task CheckMayApproveAsync(DecideDbContext db, Membership m, CancellationToken ct)
     {
         m.Require(PanelRole.Approver);
-        m.RequireStage("approve", EvaluationStage.Moderation);
+        m.RequireStage(StageRules.Approve);
         if (m.Evaluation.SignOffRequestedAt is null)
         {
             throw DomainProblem.Stage($"The facilitator has not asked for sign-off of evaluation {m.Evaluation.Reference} yet; approvals open once they do.");

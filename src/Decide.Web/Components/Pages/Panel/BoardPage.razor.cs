@@ -34,6 +34,9 @@ public partial class BoardPage
     private EvaluationService Evaluations { get; set; } = default!;
 
     [Inject]
+    private EvaluationLifecycleService Lifecycle { get; set; } = default!;
+
+    [Inject]
     private ScoringBoardService Progress { get; set; } = default!;
 
     [Inject]
@@ -75,7 +78,7 @@ public partial class BoardPage
         }
     }
 
-    private IReadOnlyList<string> BidderOrder => _detail?.Alternatives?.Select(a => a.Code).ToArray() ?? [];
+    private IReadOnlyList<string> BidderOrder => _detail?.Bids?.Select(a => a.Code).ToArray() ?? [];
 
     /// <summary>The plan's criteria in order, read from the plan the reader sees.</summary>
     private IReadOnlyList<string> CriterionOrder =>
@@ -118,7 +121,7 @@ public partial class BoardPage
         _busy = true;
         _actionProblem = null;
         var version = _detail!.Summary.Version;
-        var (result, problem) = await Attempt.RunAsync(() => Evaluations.StartModerationAsync(Id, new TransitionRequest(version)), Log, "starting moderation");
+        var (result, problem) = await Attempt.RunAsync(() => Lifecycle.StartModerationAsync(Id, new TransitionRequest(version)), Log, "starting moderation");
         _busy = false;
         if (result is null)
         {

@@ -37,6 +37,9 @@ public partial class SetupPage
     private EvaluationService Evaluations { get; set; } = default!;
 
     [Inject]
+    private EvaluationLifecycleService Lifecycle { get; set; } = default!;
+
+    [Inject]
     private ILogger<SetupPage> Log { get; set; } = default!;
 
     private bool Facilitates => _detail?.Summary.MyRoles.Contains(PanelRole.Facilitator) == true;
@@ -96,7 +99,7 @@ public partial class SetupPage
             seat.Criteria.UnionWith(s.Criteria ?? []);
             return seat;
         }).ToList();
-        _bids = (_detail.Alternatives ?? []).Select(a => new BidDraft { Code = a.Code, Name = a.Name }).ToList();
+        _bids = (_detail.Bids ?? []).Select(a => new BidDraft { Code = a.Code, Name = a.Name }).ToList();
         Snapshot();
         if (_detail.Summary.Stage != EvaluationStage.Setup && _step == 0 && !_changedElsewhere)
         {
@@ -197,8 +200,8 @@ public partial class SetupPage
 
     private async Task<bool> SaveBidsAsync()
     {
-        var bids = _bids.Select(b => new AlternativeView(b.Code.Trim(), b.Name.Trim())).ToArray();
-        var result = await RunAsync(() => Evaluations.UpdateAlternativesAsync(Id, new UpdateAlternativesRequest(bids, _detail!.Summary.Version)), "saving the bids");
+        var bids = _bids.Select(b => new BidView(b.Code.Trim(), b.Name.Trim())).ToArray();
+        var result = await RunAsync(() => Evaluations.UpdateBidsAsync(Id, new UpdateBidsRequest(bids, _detail!.Summary.Version)), "saving the bids");
         if (result is null)
         {
             return false;
@@ -241,7 +244,7 @@ public partial class SetupPage
 
     private async Task LockAsync()
     {
-        var result = await RunAsync(() => Evaluations.LockPlanAsync(Id, new TransitionRequest(_detail!.Summary.Version)), "locking the plan");
+        var result = await RunAsync(() => Lifecycle.LockPlanAsync(Id, new TransitionRequest(_detail!.Summary.Version)), "locking the plan");
         if (result is null)
         {
             return;
@@ -256,7 +259,7 @@ public partial class SetupPage
 
     private async Task OpenScoringAsync()
     {
-        var result = await RunAsync(() => Evaluations.OpenScoringAsync(Id, new TransitionRequest(_detail!.Summary.Version)), "opening scoring");
+        var result = await RunAsync(() => Lifecycle.OpenScoringAsync(Id, new TransitionRequest(_detail!.Summary.Version)), "opening scoring");
         if (result is null)
         {
             return;

@@ -1,0 +1,181 @@
+using System.Runtime.InteropServices;
+using System.Security.Cryptography;
+using System.Text;
+using System.Text.Json;
+using Decide.Core.Weighting;
+using Decide.Core;
+using Decide.Core.Analysis;
+using Decide.Data;
+using Decide.Data.Entities;
+using Decide.Interchange;
+using Decide.Interchange.Plans;
+using Decide.Web.Features.Audit;
+using Decide.Web.Infrastructure;
+using Microsoft.EntityFrameworkCore;
+
+namespace Decide.Web.Features.Evaluations;
+
+/// <summary>
+/// The moves of an evaluation through its stages: lock the plan, open scoring, start moderation (sign-off is in
+/// <see cref="SignOff.SignOffService"/>, with the approvals), open a new revision, and the legal hold. Which stage
+/// allows what is in <see cref="StageRules"/>; each move is a method of <see cref="StoredEvaluation"/>. Shared by the
+/// API and the screens.
+/// </summary>
+public sealed class EvaluationLifecycleService(
+    IDbContextFactory<DecideDbContext> factory,
+    EvaluationAccess access,
+    CurrentUser user,
+    AuditWriter audit,
+    PlanLockCheck lockCheck,
+    TimeProvider clock)
+{
+    /// <summary>
+    /// Setup → plan locked. The plan, the panel's weights and assignments and every weight judgement are frozen;
+    /// refused while the plan or the weights are incomplete or invalid.
+    /// </summary>
+    public Task<TransitionResult> LockPlanAsync(Guid id, TransitionRequest request, CancellationToken ct = default) =>
+        Transition(id, request, StageRules.LockPlan, "plan.locked", async (db, m) =>
+        {
+            var check = await lockCheck.CheckAsync(db, m.Evaluation, ct);
+            if (check.Blocking.Count > 0)
+            {
+                throw DomainProblem.Stage($"The plan cannot be locked yet. {string.Join(" ", check.Blocking)}");
+            }
+
+            if (check.Errors.Count > 0)
+            {
+                throw new InvalidEvaluationException(check.Errors);
+            }
+
+            m.Evaluation.LockPlan(clock.GetUtcNow(), Sha256(m.Evaluation.PlanJson));
+            return check.Consistency;
+        }, ct);
+
+    /// <summary>Plan locked → scoring: bidders' names become visible to assessors who confirm their declaration.</summary>
+    public Task<TransitionResult> OpenScoringAsync(Guid id, TransitionRequest request, CancellationToken ct = default) =>
+        Transition(id, request, StageRules.OpenScoring, "scoring.opened", async (db, m) =>
+        {
+            if (!await db.Alternatives.AnyAsync(a => a.EvaluationId == id, ct))
+            {
+                throw DomainProblem.Stage("Cannot open scoring: no bid is registered.");
+            }
+
+            m.Evaluation.OpenScoring(clock.GetUtcNow());
+            return [];
+        }, ct);
+
+    /// <summary>Scoring → moderation: every assessor must have submitted their sheet.</summary>
+    public Task<TransitionResult> StartModerationAsync(Guid id, TransitionRequest request, CancellationToken ct = default) =>
+        Transition(id, request, StageRules.StartModeration, "moderation.started", (db, m) =>
+        {
+            var open = m.Evaluation.Panel.Where(p => p.Role == PanelRole.Assessor && p.SubmittedAt is null).Select(p => p.AssessorCode).ToArray();
+            if (open.Length > 0)
+            {
+                throw DomainProblem.Stage($"Cannot start moderation: {string.Join(", ", open)} {(open.Length == 1 ? "has" : "have")} not submitted a rating sheet.");
+            }
+
+            m.Evaluation.StartModeration(clock.GetUtcNow());
+            return Task.FromResult<IReadOnlyList<string>>([]);
+        }, ct);
+
+    /// <summary>
+    /// Opens a new revision in setup, copying the plan, the panel (declarations to be signed again), the bids and
+    /// the weight judgements; the old revision keeps everything and becomes superseded.
+    /// </summary>
+    public Task<EvaluationSummary> NewRevisionAsync(Guid id, RevisionRequest request, CancellationToken ct = default) =>
+        UnitOfWork.RunAsync(factory, async db =>
+        {
+            var m = await access.LoadAsync(db, id, ct);
+            m.Require(PanelRole.Facilitator);
+            m.RequireStage(StageRules.OpenRevision);
+            if (string.IsNullOrWhiteSpace(request.Reason) || request.Reason.Trim().Length < 10)
+            {
+                throw DomainProblem.Invalid("reason", "say why a new revision is needed (at least 10 characters); it becomes part of the record");
+            }
+
+            var old = m.Evaluation;
+            var now = clock.GetUtcNow();
+            var next = new StoredEvaluation
+            {
+                Id = Guid.NewGuid(),
+                Reference = old.Reference,
+                Title = old.Title,
+                Organisation = old.Organisation,
+                Revision = old.Revision + 1,
+                PreviousRevisionId = old.Id,
+                RevisionReason = request.Reason.Trim(),
+                PlanJson = old.PlanJson,
+                MinRationaleLength = old.MinRationaleLength,
+                PricesVisibleToAssessors = old.PricesVisibleToAssessors,
+                RequiredApprovals = old.RequiredApprovals,
+                CreatedAt = now,
+                CreatedBy = user.Id,
+                LegalHold = old.LegalHold,
+                LegalHoldReason = old.LegalHoldReason,
+            };
+            next.Panel.AddRange(old.Panel.Select(p => new PanelMember
+            {
+                UserId = p.UserId, Role = p.Role, AssessorCode = p.AssessorCode, Weight = p.Weight, AssignedCriteriaJson = p.AssignedCriteriaJson,
+            }));
+            db.Evaluations.Add(next);
+            var alternatives = await db.Alternatives.AsNoTracking().Where(a => a.EvaluationId == id).ToListAsync(ct);
+            db.Alternatives.AddRange(alternatives.Select(a => new StoredAlternative { EvaluationId = next.Id, Code = a.Code, Name = a.Name, Position = a.Position, AddedAt = now }));
+            var judgements = await db.WeightJudgements.AsNoTracking().Where(w => w.EvaluationId == id).ToListAsync(ct);
+            db.WeightJudgements.AddRange(judgements.Select(w => new WeightJudgement
+            {
+                EvaluationId = next.Id, AssessorCode = w.AssessorCode, Kind = w.Kind, Node = w.Node, Column = w.Column, Term = w.Term,
+                Lower = w.Lower, Middle = w.Middle, Upper = w.Upper, UpdatedAt = now,
+            }));
+            old.SupersedeBy(next.Id);
+            audit.Record(db, old.Id, new AuditEvent("revision.opened", $"evaluations/{old.Id}", $"revision {old.Revision}",
+                $"revision {next.Revision} ({next.Id}): {next.RevisionReason}"));
+            audit.Record(db, next.Id, new AuditEvent("evaluation.created", $"evaluations/{next.Id}", null,
+                $"revision {next.Revision} of {old.Id}: {next.RevisionReason}"));
+            await EvaluationStore.SaveAsync(db, old, ct);
+            return EvaluationStore.Summarise(next, m.Roles);
+        }, ct);
+
+    public Task<EvaluationSummary> SetLegalHoldAsync(Guid id, LegalHoldRequest request, CancellationToken ct = default) =>
+        UnitOfWork.RunAsync(factory, async db =>
+        {
+            if (!user.IsAdministrator)
+            {
+                throw DomainProblem.Forbidden("Only an administrator sets or lifts a legal hold.");
+            }
+
+            if (string.IsNullOrWhiteSpace(request.Reason))
+            {
+                throw DomainProblem.Invalid("reason", "say why the hold is set or lifted");
+            }
+
+            var m = await access.LoadAsync(db, id, ct);
+            var before = m.Evaluation.LegalHold;
+            m.Evaluation.LegalHold = request.Hold;
+            m.Evaluation.LegalHoldReason = request.Reason.Trim();
+            db.MarkChanged(m.Evaluation);
+            audit.Record(db, id, new AuditEvent(request.Hold ? "legal-hold.set" : "legal-hold.lifted", $"evaluations/{id}",
+                before.ToString(), $"{request.Hold}: {request.Reason.Trim()}"));
+            await EvaluationStore.SaveAsync(db, m.Evaluation, ct);
+            return EvaluationStore.Summarise(m.Evaluation, m.Roles);
+        }, ct);
+
+    private Task<TransitionResult> Transition(
+        Guid id, TransitionRequest request, StageRule rule, string auditAction,
+        Func<DecideDbContext, Membership, Task<IReadOnlyList<string>>> move, CancellationToken ct) =>
+        UnitOfWork.RunAsync(factory, async db =>
+        {
+            var m = await access.LoadAsync(db, id, ct);
+            m.Require(PanelRole.Facilitator);
+            m.RequireStage(rule);
+            EvaluationStore.CheckVersion(m.Evaluation, request.Version);
+            var from = m.Evaluation.Stage;
+            var warnings = await move(db, m); // checks what the move needs, makes it on the entity, says what to know
+            var to = m.Evaluation.Stage;
+            audit.Record(db, id, new AuditEvent(auditAction, $"evaluations/{id}", from.ToString(),
+                to + (warnings.Count > 0 ? $" (warnings: {string.Join(" ", warnings)})" : "")));
+            await EvaluationStore.SaveAsync(db, m.Evaluation, ct);
+            return new TransitionResult(EvaluationStore.Summarise(m.Evaluation, m.Roles), warnings);
+        }, ct);
+
+    private static string Sha256(string text) => Convert.ToHexStringLower(SHA256.HashData(Encoding.UTF8.GetBytes(text)));
+}
