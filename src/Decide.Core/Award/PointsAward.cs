@@ -1,0 +1,317 @@
+namespace Decide.Core.Award;
+
+/// <summary>What breaks a tie in the award, in the order the plan lists the rules.</summary>
+public enum TieBreak
+{
+    /// <summary>More quality points wins.</summary>
+    HigherQuality,
+
+    /// <summary>The lower price wins.</summary>
+    LowerPrice,
+
+    /// <summary>The bid submitted first wins (the order the bids are given in).</summary>
+    EarlierSubmission,
+}
+
+/// <summary>When a price is flagged as abnormally low; either test, or both, may be set.</summary>
+/// <param name="BelowMeanOfOthersPercent">Flag a price more than this many per cent below the mean of the other admissible prices.</param>
+/// <param name="Estimate">The buyer's estimate of the contract's value.</param>
+/// <param name="BelowEstimatePercent">Flag a price more than this many per cent below <paramref name="Estimate"/>.</param>
+public sealed record AbnormallyLowRule(double? BelowMeanOfOthersPercent, double? Estimate = null, double? BelowEstimatePercent = null);
+
+/// <summary>A points award published with the tender: the quality criteria's points, the scale, the price rule, thresholds and tie-breaks.</summary>
+/// <param name="CriterionPoints">The points of each quality criterion, in criterion order.</param>
+/// <param name="ScaleMaximum">The highest score of the scoring scale (5 for a 0–5 scale).</param>
+/// <param name="Price">The price rule.</param>
+/// <param name="MinimumQualityShare">The least share of all quality points a bid needs (0.6 for 60 %), or null.</param>
+/// <param name="MinimumScores">The least panel score per criterion (on the scale), or null for none; null or one entry per criterion.</param>
+/// <param name="TieBreaks">The tie-break rules in the order they apply.</param>
+/// <param name="AbnormallyLow">When a price is flagged as abnormally low, or null.</param>
+public sealed record AwardPlan(
+    IReadOnlyList<double> CriterionPoints,
+    double ScaleMaximum,
+    PriceRule Price,
+    double? MinimumQualityShare = null,
+    IReadOnlyList<double?>? MinimumScores = null,
+    IReadOnlyList<TieBreak>? TieBreaks = null,
+    AbnormallyLowRule? AbnormallyLow = null)
+{
+    /// <summary>All quality points.</summary>
+    public double QualityPoints => CriterionPoints.Sum();
+}
+
+/// <summary>One bid as the award sees it.</summary>
+/// <param name="Id">The bid's code.</param>
+/// <param name="Scores">The panel's score per quality criterion, on the scale (the mean of the assessors' points or the moderated value).</param>
+/// <param name="Price">The bid's price (positive).</param>
+/// <param name="RejectedAsAbnormallyLow">True when the facilitator recorded the decision to reject the price as abnormally low.</param>
+public sealed record AwardBid(string Id, IReadOnlyList<double> Scores, double Price, bool RejectedAsAbnormallyLow = false);
+
+/// <summary>Why a bid takes no part in the award.</summary>
+public enum AwardExclusion
+{
+    /// <summary>Below the overall quality threshold.</summary>
+    BelowQualityThreshold,
+
+    /// <summary>Below a criterion's minimum score.</summary>
+    BelowCriterionMinimum,
+
+    /// <summary>Rejected as abnormally low after its explanation was considered.</summary>
+    AbnormallyLow,
+
+    /// <summary>Above the budget of a budget-based price rule.</summary>
+    OverBudget,
+}
+
+/// <summary>One bid's award: every part a bidder needs to recompute its total with a calculator.</summary>
+/// <param name="Id">The bid's code.</param>
+/// <param name="CriterionPoints">Quality points per criterion: score ÷ scale maximum × the criterion's points.</param>
+/// <param name="QualityPoints">Their sum.</param>
+/// <param name="QualityShare">Quality points ÷ all quality points.</param>
+/// <param name="Price">The bid's price.</param>
+/// <param name="PricePoints">Price points, when the formula gives points and the bid reached price scoring.</param>
+/// <param name="Figure">The ranking figure (lowest first) of a formula that gives no points.</param>
+/// <param name="Total">Quality points + price points, for a formula that gives points.</param>
+/// <param name="Rank">1 for the award; null for an excluded bid. Bids still tied after every tie-break share a rank.</param>
+/// <param name="Excluded">Why the bid takes no part, or null.</param>
+/// <param name="ExclusionDetail">The threshold or criterion that excluded it, in words.</param>
+/// <param name="AbnormallyLowFlag">Why its price is flagged as abnormally low, or null.</param>
+/// <param name="DecidedBy">The tie-break that placed this bid above the next one, when the main figure was equal.</param>
+public sealed record AwardedBid(
+    string Id, IReadOnlyList<double> CriterionPoints, double QualityPoints, double QualityShare, double Price,
+    double? PricePoints, double? Figure, double? Total, int? Rank, AwardExclusion? Excluded, string? ExclusionDetail,
+    string? AbnormallyLowFlag, TieBreak? DecidedBy);
+
+/// <summary>The award: every bid in the order given, and whether a tie remained after every tie-break.</summary>
+public sealed record AwardResult(IReadOnlyList<AwardedBid> Bids, bool UnresolvedTie)
+{
+    /// <summary>The bids in the running, best first.</summary>
+    public IEnumerable<AwardedBid> Ranking => Bids.Where(b => b.Rank is not null).OrderBy(b => b.Rank);
+}
+
+/// <summary>
+/// The points award a tender can publish: absolute quality points per criterion, thresholds applied before price,
+/// abnormally low prices flagged among the bids that passed, the price rule on the bids still in the running, then
+/// the total (or the figure) and the tie-breaks. A bid's quality points never depend on the other bids.
+/// </summary>
+public static class PointsAward
+{
+    private const double Tolerance = 1e-9;
+
+    /// <summary>Computes the award.</summary>
+    /// <exception cref="ArgumentException">A bid's scores do not match the plan's criteria, or a price is not positive.</exception>
+    public static AwardResult Compute(AwardPlan plan, IReadOnlyList<AwardBid> bids)
+    {
+        ArgumentNullException.ThrowIfNull(plan);
+        ArgumentNullException.ThrowIfNull(bids);
+        var m = plan.CriterionPoints.Count;
+        var total = plan.QualityPoints;
+        var info = PriceFormulas.Describe(plan.Price.Formula);
+
+        // 1. Quality, absolute: each bid on its own.
+        var rows = new Row[bids.Count];
+        for (var b = 0; b < bids.Count; b++)
+        {
+            var bid = bids[b];
+            if (bid.Scores.Count != m)
+            {
+                throw new ArgumentException($"Bid {bid.Id} has {bid.Scores.Count} scores for {m} criteria.", nameof(bids));
+            }
+
+            if (!(bid.Price > 0 && double.IsFinite(bid.Price)))
+            {
+                throw new ArgumentException($"Bid {bid.Id} has no positive price.", nameof(bids));
+            }
+
+            var points = new double[m];
+            for (var j = 0; j < m; j++)
+            {
+                points[j] = bid.Scores[j] / plan.ScaleMaximum * plan.CriterionPoints[j];
+            }
+
+            var quality = points.Sum();
+            rows[b] = new Row(bid, points, quality, total > 0 ? quality / total : 0);
+        }
+
+        // 2. Thresholds, before price.
+        foreach (var row in rows)
+        {
+            if (plan.MinimumScores is { } minimum)
+            {
+                for (var j = 0; j < m; j++)
+                {
+                    if (minimum[j] is { } least && row.Bid.Scores[j] < least - Tolerance)
+                    {
+                        row.Exclude(AwardExclusion.BelowCriterionMinimum, $"criterion {j + 1} scored {row.Bid.Scores[j]:0.##}, below the minimum of {least:0.##}");
+                        break;
+                    }
+                }
+            }
+
+            if (row.Excluded is null && plan.MinimumQualityShare is { } share && row.Share < share - Tolerance)
+            {
+                row.Exclude(AwardExclusion.BelowQualityThreshold, $"{row.Share:P1} of the quality points, below the threshold of {share:P0}");
+            }
+        }
+
+        // 3. Abnormally low prices, among the bids that passed quality.
+        var passed = rows.Where(r => r.Excluded is null).ToArray();
+        if (plan.AbnormallyLow is { } low)
+        {
+            foreach (var row in passed)
+            {
+                row.LowFlag = LowFlag(low, row, passed);
+            }
+        }
+
+        foreach (var row in passed.Where(r => r.Bid.RejectedAsAbnormallyLow))
+        {
+            row.Exclude(AwardExclusion.AbnormallyLow, "price rejected as abnormally low after its explanation was considered");
+        }
+
+        // 4. Price, on the bids still in the running (a budget rule first takes out the bids over budget).
+        var running = rows.Where(r => r.Excluded is null).ToList();
+        if (plan.Price.Formula == PriceFormula.BudgetBased)
+        {
+            foreach (var row in running.Where(r => r.Bid.Price > plan.Price.Budget))
+            {
+                row.Exclude(AwardExclusion.OverBudget, $"price {row.Bid.Price:0.##} above the budget of {plan.Price.Budget:0.##}");
+            }
+
+            running.RemoveAll(r => r.Excluded is not null);
+        }
+
+        var scores = PriceScoring.Score(plan.Price, running.Select(r => r.Bid.Price).ToArray(), running.Select(r => r.Quality).ToArray());
+        for (var i = 0; i < running.Count; i++)
+        {
+            running[i].Price = scores[i];
+        }
+
+        // 5. Order: by total (highest first) or by figure (lowest first), then the tie-breaks.
+        var rules = plan.TieBreaks ?? [];
+        double Main(Row r) => info.GivesPoints ? -(r.Quality + r.Price.Points!.Value) : r.Price.Figure!.Value;
+        var order = running.OrderBy(Main).ToList();
+        order.Sort((x, y) => Compare(x, y, Main, rules, Array.IndexOf(rows, x), Array.IndexOf(rows, y)));
+        var unresolved = false;
+        for (var i = 0; i < order.Count; i++)
+        {
+            if (i == 0)
+            {
+                order[i].Rank = 1;
+                continue;
+            }
+
+            var (above, here) = (order[i - 1], order[i]);
+            if (Math.Abs(Main(above) - Main(here)) > Tolerance)
+            {
+                here.Rank = i + 1;
+                continue;
+            }
+
+            var decider = Decider(above, here, rules, Array.IndexOf(rows, above), Array.IndexOf(rows, here));
+            if (decider is null)
+            {
+                here.Rank = above.Rank;
+                unresolved = true;
+            }
+            else
+            {
+                above.DecidedBy ??= decider;
+                here.Rank = i + 1;
+            }
+        }
+
+        return new AwardResult(rows.Select(r => new AwardedBid(
+            r.Bid.Id, r.Points, r.Quality, r.Share, r.Bid.Price,
+            r.Excluded is null && info.GivesPoints ? r.Price.Points : null,
+            r.Excluded is null && !info.GivesPoints ? r.Price.Figure : null,
+            r.Excluded is null && info.GivesPoints ? r.Quality + r.Price.Points : null,
+            r.Rank, r.Excluded, r.Detail, r.LowFlag, r.DecidedBy)).ToArray(), unresolved);
+    }
+
+    private static string? LowFlag(AbnormallyLowRule rule, Row row, IReadOnlyList<Row> passed)
+    {
+        if (rule.BelowMeanOfOthersPercent is { } percent && passed.Count > 1)
+        {
+            var mean = passed.Where(r => !ReferenceEquals(r, row)).Average(r => r.Bid.Price);
+            if (row.Bid.Price < mean * (1 - (percent / 100)) - Tolerance)
+            {
+                return $"{(1 - (row.Bid.Price / mean)):P1} below the mean of the other admissible prices ({mean:0.##}); the rule flags more than {percent / 100:P0}";
+            }
+        }
+
+        if (rule is { Estimate: { } estimate, BelowEstimatePercent: { } belowEstimate } && row.Bid.Price < estimate * (1 - (belowEstimate / 100)) - Tolerance)
+        {
+            return $"{(1 - (row.Bid.Price / estimate)):P1} below the estimate ({estimate:0.##}); the rule flags more than {belowEstimate / 100:P0}";
+        }
+
+        return null;
+    }
+
+    private static int Compare(Row x, Row y, Func<Row, double> main, IReadOnlyList<TieBreak> rules, int ix, int iy)
+    {
+        var (mx, my) = (main(x), main(y));
+        if (Math.Abs(mx - my) > Tolerance)
+        {
+            return mx.CompareTo(my);
+        }
+
+        foreach (var rule in rules)
+        {
+            var c = Prefer(rule, x, y, ix, iy);
+            if (c != 0)
+            {
+                return c;
+            }
+        }
+
+        return 0;
+    }
+
+    private static TieBreak? Decider(Row above, Row here, IReadOnlyList<TieBreak> rules, int ia, int ih)
+    {
+        foreach (var rule in rules)
+        {
+            if (Prefer(rule, above, here, ia, ih) != 0)
+            {
+                return rule;
+            }
+        }
+
+        return null;
+    }
+
+    /// <summary>Negative when <paramref name="x"/> goes first by <paramref name="rule"/>, positive when <paramref name="y"/> does.</summary>
+    private static int Prefer(TieBreak rule, Row x, Row y, int ix, int iy) => rule switch
+    {
+        TieBreak.HigherQuality => Math.Abs(x.Quality - y.Quality) <= Tolerance ? 0 : y.Quality.CompareTo(x.Quality),
+        TieBreak.LowerPrice => Math.Abs(x.Bid.Price - y.Bid.Price) <= Tolerance ? 0 : x.Bid.Price.CompareTo(y.Bid.Price),
+        TieBreak.EarlierSubmission => ix.CompareTo(iy),
+        _ => 0,
+    };
+
+    private sealed class Row(AwardBid bid, double[] points, double quality, double share)
+    {
+        public AwardBid Bid { get; } = bid;
+
+        public double[] Points { get; } = points;
+
+        public double Quality { get; } = quality;
+
+        public double Share { get; } = share;
+
+        public AwardExclusion? Excluded { get; private set; }
+
+        public string? Detail { get; private set; }
+
+        public string? LowFlag { get; set; }
+
+        public PriceScore Price { get; set; }
+
+        public int? Rank { get; set; }
+
+        public TieBreak? DecidedBy { get; set; }
+
+        public void Exclude(AwardExclusion why, string detail) => (Excluded, Detail) = (why, detail);
+    }
+}
