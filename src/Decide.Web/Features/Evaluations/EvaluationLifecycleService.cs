@@ -1,14 +1,8 @@
-using System.Runtime.InteropServices;
 using System.Security.Cryptography;
 using System.Text;
-using System.Text.Json;
-using Decide.Core.Weighting;
 using Decide.Core;
-using Decide.Core.Analysis;
 using Decide.Data;
 using Decide.Data.Entities;
-using Decide.Interchange;
-using Decide.Interchange.Plans;
 using Decide.Web.Features.Audit;
 using Decide.Web.Infrastructure;
 using Microsoft.EntityFrameworkCore;

@@ -1,10 +1,7 @@
 using System.Runtime.InteropServices;
-using System.Security.Cryptography;
-using System.Text;
 using System.Text.Json;
-using Decide.Core.Weighting;
 using Decide.Core;
-using Decide.Core.Analysis;
+using Decide.Core.Weighting;
 using Decide.Data;
 using Decide.Data.Entities;
 using Decide.Interchange;
