@@ -130,7 +130,7 @@ public static class PointsAward
             }
 
             var quality = points.Sum();
-            rows[b] = new Row(bid, points, quality, total > 0 ? quality / total : 0);
+            rows[b] = new Row(b, bid, points, quality, total > 0 ? quality / total : 0);
         }
 
         // 2. Thresholds, before price.
@@ -191,7 +191,7 @@ public static class PointsAward
         var rules = plan.TieBreaks ?? [];
         double Main(Row r) => info.GivesPoints ? -(r.Quality + r.Price.Points!.Value) : r.Price.Figure!.Value;
         var order = running.OrderBy(Main).ToList();
-        order.Sort((x, y) => Compare(x, y, Main, rules, Array.IndexOf(rows, x), Array.IndexOf(rows, y)));
+        order.Sort((x, y) => Compare(x, y, Main, rules));
         var unresolved = false;
         for (var i = 0; i < order.Count; i++)
         {
@@ -208,7 +208,7 @@ public static class PointsAward
                 continue;
             }
 
-            var decider = Decider(above, here, rules, Array.IndexOf(rows, above), Array.IndexOf(rows, here));
+            var decider = Decider(above, here, rules);
             if (decider is null)
             {
                 here.Rank = above.Rank;
@@ -248,7 +248,7 @@ public static class PointsAward
         return null;
     }
 
-    private static int Compare(Row x, Row y, Func<Row, double> main, IReadOnlyList<TieBreak> rules, int ix, int iy)
+    private static int Compare(Row x, Row y, Func<Row, double> main, IReadOnlyList<TieBreak> rules)
     {
         var (mx, my) = (main(x), main(y));
         if (Math.Abs(mx - my) > Tolerance)
@@ -258,7 +258,7 @@ public static class PointsAward
 
         foreach (var rule in rules)
         {
-            var c = Prefer(rule, x, y, ix, iy);
+            var c = Prefer(rule, x, y);
             if (c != 0)
             {
                 return c;
@@ -268,11 +268,11 @@ public static class PointsAward
         return 0;
     }
 
-    private static TieBreak? Decider(Row above, Row here, IReadOnlyList<TieBreak> rules, int ia, int ih)
+    private static TieBreak? Decider(Row above, Row here, IReadOnlyList<TieBreak> rules)
     {
         foreach (var rule in rules)
         {
-            if (Prefer(rule, above, here, ia, ih) != 0)
+            if (Prefer(rule, above, here) != 0)
             {
                 return rule;
             }
@@ -282,16 +282,19 @@ public static class PointsAward
     }
 
     /// <summary>Negative when <paramref name="x"/> goes first by <paramref name="rule"/>, positive when <paramref name="y"/> does.</summary>
-    private static int Prefer(TieBreak rule, Row x, Row y, int ix, int iy) => rule switch
+    private static int Prefer(TieBreak rule, Row x, Row y) => rule switch
     {
         TieBreak.HigherQuality => Math.Abs(x.Quality - y.Quality) <= Tolerance ? 0 : y.Quality.CompareTo(x.Quality),
         TieBreak.LowerPrice => Math.Abs(x.Bid.Price - y.Bid.Price) <= Tolerance ? 0 : x.Bid.Price.CompareTo(y.Bid.Price),
-        TieBreak.EarlierSubmission => ix.CompareTo(iy),
+        TieBreak.EarlierSubmission => x.Index.CompareTo(y.Index),
         _ => 0,
     };
 
-    private sealed class Row(AwardBid bid, double[] points, double quality, double share)
+    private sealed class Row(int index, AwardBid bid, double[] points, double quality, double share)
     {
+        /// <summary>The bid's place in the order given (its submission order).</summary>
+        public int Index { get; } = index;
+
         public AwardBid Bid { get; } = bid;
 
         public double[] Points { get; } = points;

@@ -101,6 +101,10 @@ public sealed class PointsAwardTests
         Assert.Equal(1, Rank(byPrice, "B"));
         Assert.Equal(TieBreak.LowerPrice, byPrice.Bids.Single(x => x.Id == "B").DecidedBy);
 
+        var bySubmission = PointsAward.Compute(plan with { TieBreaks = [TieBreak.EarlierSubmission] }, [b, a]);
+        Assert.Equal(1, Rank(bySubmission, "B")); // listed (submitted) first
+        Assert.Equal(TieBreak.EarlierSubmission, bySubmission.Bids.Single(x => x.Id == "B").DecidedBy);
+
         var none = PointsAward.Compute(plan with { TieBreaks = [] }, [a, b]);
         Assert.True(none.UnresolvedTie);
         Assert.Equal(Rank(none, "A"), Rank(none, "B"));
