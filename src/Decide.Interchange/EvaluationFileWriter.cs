@@ -167,6 +167,11 @@ public static class EvaluationFileWriter
             w.WriteString("label", term.Label);
             WriteTfn(w, "tfn", term.Value);
             WriteOptional(w, "descriptor", term.Descriptor);
+            if (term.Points is { } points)
+            {
+                w.WriteNumber("points", points);
+            }
+
             w.WriteEndObject();
         }
 

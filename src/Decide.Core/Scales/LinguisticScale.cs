@@ -110,6 +110,22 @@ public sealed class LinguisticScale
             {
                 errors.Add($"{at}.tfn", $"term \"{term.Code}\" must have a larger middle value than \"{terms[i - 1].Code}\" before it ({F(term.Value.Middle)} ≤ {F(terms[i - 1].Value.Middle)}); list terms from least to most favourable");
             }
+
+            if (term.Points is { } points && !(points >= 0 && double.IsFinite(points)))
+            {
+                errors.Add($"{at}.points", $"term \"{term.Code}\" must score zero or more points; got {F(points)}");
+            }
+            else if (i > 0 && term.Points is { } here && terms[i - 1].Points is { } before && here < before)
+            {
+                errors.Add($"{at}.points", $"term \"{term.Code}\" scores fewer points than \"{terms[i - 1].Code}\" before it ({F(here)} < {F(before)}); points may not decrease from the least to the most favourable term");
+            }
+        }
+
+        var scored = terms.Count(t => t.Points is not null);
+        if (scored > 0 && scored < terms.Count)
+        {
+            var first = terms.Select((t, i) => (t, i)).First(x => x.t.Points is null);
+            errors.Add($"{path}.terms[{first.i}].points", $"term \"{first.t.Code}\" has no points while other terms of the scale do; give every term its points, or none");
         }
 
         errors.ThrowIfAny();

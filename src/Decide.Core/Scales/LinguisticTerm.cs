@@ -10,4 +10,8 @@ namespace Decide.Core.Scales;
 /// Optional: what the term means in general. Per-criterion descriptors live on the criterion, because "Good" for
 /// delivery is not "Good" for security.
 /// </param>
-public sealed record LinguisticTerm(string Code, string Label, Tfn Value, string? Descriptor = null);
+/// <param name="Points">
+/// Optional: the points the term scores in a published points award (5 for "Excellent" on a 0–5 scale), beside its
+/// triangular number. A scale gives points to every term or to none, never decreasing from one term to the next.
+/// </param>
+public sealed record LinguisticTerm(string Code, string Label, Tfn Value, string? Descriptor = null, double? Points = null);

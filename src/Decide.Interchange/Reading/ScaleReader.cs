@@ -12,7 +12,7 @@ namespace Decide.Interchange.Reading;
 internal static class ScaleReader
 {
     private static readonly string[] ScaleMembers = ["name", "range", "terms"];
-    private static readonly string[] TermMembers = ["code", "label", "tfn", "descriptor"];
+    private static readonly string[] TermMembers = ["code", "label", "tfn", "descriptor", "points"];
 
     /// <summary>The scale at <paramref name="path"/>; <paramref name="usable"/> is false when it had problems.</summary>
     public static LinguisticScale Read(
@@ -85,6 +85,7 @@ internal static class ScaleReader
                 var code = term.String("code", "a short code such as \"G\"") ?? "";
                 var label = term.String("label", "the words shown to people, such as \"Good\"") ?? "";
                 var descriptor = term.String("descriptor");
+                var points = term.Number("points");
                 Tfn? tfn = term.Has("tfn") ? term.Tfn("tfn") : null;
                 if (!term.Has("tfn"))
                 {
@@ -93,7 +94,7 @@ internal static class ScaleReader
 
                 if (tfn is { } v)
                 {
-                    terms.Add(new LinguisticTerm(code, label, v, descriptor));
+                    terms.Add(new LinguisticTerm(code, label, v, descriptor, points));
                     fileIndex.Add(i);
                 }
             }
