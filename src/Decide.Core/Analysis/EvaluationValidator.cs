@@ -10,8 +10,6 @@ namespace Decide.Core.Analysis;
 /// </summary>
 public static class EvaluationValidator
 {
-    /// <summary>The id reserved for the panel's aggregate in results.</summary>
-    private const string PanelId = WeightStructure.PanelId;
 
     /// <summary>Returns every problem found; an empty list means the evaluation can be analysed.</summary>
     public static IReadOnlyList<EvaluationError> Validate(Evaluation evaluation)
@@ -223,9 +221,9 @@ public static class EvaluationValidator
                 var at = $"$.assessors[{k}]";
                 if (CheckId(assessor.Id, $"{at}.id"))
                 {
-                    if (assessor.Id == PanelId)
+                    if (assessor.Id == WeightStructure.PanelId)
                     {
-                        Add($"{at}.id", $"\"{PanelId}\" is reserved for the panel's aggregate; choose another id");
+                        Add($"{at}.id", $"\"{WeightStructure.PanelId}\" is reserved for the panel's aggregate; choose another id");
                     }
                     else if (!_assessors.TryAdd(assessor.Id, assessor))
                     {

@@ -1,3 +1,5 @@
+using static System.FormattableString;
+
 namespace Decide.Core.Award;
 
 /// <summary>What breaks a tie in the award, in the order the plan lists the rules.</summary>
@@ -27,6 +29,7 @@ public sealed record AbnormallyLowRule(double? BelowMeanOfOthersPercent, double?
 /// <param name="MinimumScores">The least panel score per criterion (on the scale), or null for none; null or one entry per criterion.</param>
 /// <param name="TieBreaks">The tie-break rules in the order they apply.</param>
 /// <param name="AbnormallyLow">When a price is flagged as abnormally low, or null.</param>
+/// <param name="CriterionNames">The criteria's names, in criterion order, for the reasons a bid is excluded; null to number them.</param>
 public sealed record AwardPlan(
     IReadOnlyList<double> CriterionPoints,
     double ScaleMaximum,
@@ -34,10 +37,15 @@ public sealed record AwardPlan(
     double? MinimumQualityShare = null,
     IReadOnlyList<double?>? MinimumScores = null,
     IReadOnlyList<TieBreak>? TieBreaks = null,
-    AbnormallyLowRule? AbnormallyLow = null)
+    AbnormallyLowRule? AbnormallyLow = null,
+    IReadOnlyList<string>? CriterionNames = null)
 {
     /// <summary>All quality points.</summary>
     public double QualityPoints => CriterionPoints.Sum();
+
+    /// <summary>The name of criterion <paramref name="index"/> as a reason prints it.</summary>
+    public string CriterionName(int index) =>
+        CriterionNames is { } names && index < names.Count ? $"\"{names[index]}\"" : Invariant($"criterion {index + 1}");
 }
 
 /// <summary>One bid as the award sees it.</summary>
@@ -142,7 +150,7 @@ public static class PointsAward
                 {
                     if (minimum[j] is { } least && row.Bid.Scores[j] < least - Tolerance)
                     {
-                        row.Exclude(AwardExclusion.BelowCriterionMinimum, $"criterion {j + 1} scored {row.Bid.Scores[j]:0.##}, below the minimum of {least:0.##}");
+                        row.Exclude(AwardExclusion.BelowCriterionMinimum, Invariant($"{plan.CriterionName(j)} scored {row.Bid.Scores[j]:0.##}, below the minimum of {least:0.##}"));
                         break;
                     }
                 }
@@ -150,7 +158,7 @@ public static class PointsAward
 
             if (row.Excluded is null && plan.MinimumQualityShare is { } share && row.Share < share - Tolerance)
             {
-                row.Exclude(AwardExclusion.BelowQualityThreshold, $"{row.Share:P1} of the quality points, below the threshold of {share:P0}");
+                row.Exclude(AwardExclusion.BelowQualityThreshold, Invariant($"{row.Share:P1} of the quality points, below the threshold of {share:P0}"));
             }
         }
 
@@ -175,7 +183,7 @@ public static class PointsAward
         {
             foreach (var row in running.Where(r => r.Bid.Price > plan.Price.Budget))
             {
-                row.Exclude(AwardExclusion.OverBudget, $"price {row.Bid.Price:0.##} above the budget of {plan.Price.Budget:0.##}");
+                row.Exclude(AwardExclusion.OverBudget, Invariant($"price {row.Bid.Price:0.##} above the budget of {plan.Price.Budget:0.##}"));
             }
 
             running.RemoveAll(r => r.Excluded is not null);
@@ -190,7 +198,7 @@ public static class PointsAward
         // 5. Order: by total (highest first) or by figure (lowest first), then the tie-breaks.
         var rules = plan.TieBreaks ?? [];
         double Main(Row r) => info.GivesPoints ? -(r.Quality + r.Price.Points!.Value) : r.Price.Figure!.Value;
-        var order = running.OrderBy(Main).ToList();
+        var order = running.ToList();
         order.Sort((x, y) => Compare(x, y, Main, rules));
         var unresolved = false;
         for (var i = 0; i < order.Count; i++)
@@ -236,13 +244,13 @@ public static class PointsAward
             var mean = passed.Where(r => !ReferenceEquals(r, row)).Average(r => r.Bid.Price);
             if (row.Bid.Price < mean * (1 - (percent / 100)) - Tolerance)
             {
-                return $"{(1 - (row.Bid.Price / mean)):P1} below the mean of the other admissible prices ({mean:0.##}); the rule flags more than {percent / 100:P0}";
+                return Invariant($"{1 - (row.Bid.Price / mean):P1} below the mean of the other admissible prices ({mean:0.##}); the rule flags more than {percent / 100:P0}");
             }
         }
 
         if (rule is { Estimate: { } estimate, BelowEstimatePercent: { } belowEstimate } && row.Bid.Price < estimate * (1 - (belowEstimate / 100)) - Tolerance)
         {
-            return $"{(1 - (row.Bid.Price / estimate)):P1} below the estimate ({estimate:0.##}); the rule flags more than {belowEstimate / 100:P0}";
+            return Invariant($"{1 - (row.Bid.Price / estimate):P1} below the estimate ({estimate:0.##}); the rule flags more than {belowEstimate / 100:P0}");
         }
 
         return null;
@@ -256,16 +264,7 @@ public static class PointsAward
             return mx.CompareTo(my);
         }
 
-        foreach (var rule in rules)
-        {
-            var c = Prefer(rule, x, y);
-            if (c != 0)
-            {
-                return c;
-            }
-        }
-
-        return 0;
+        return Decider(x, y, rules) is { } rule ? Prefer(rule, x, y) : 0;
     }
 
     private static TieBreak? Decider(Row above, Row here, IReadOnlyList<TieBreak> rules)

@@ -66,7 +66,7 @@ public sealed class AwardPropertyTests
     }
 
     [Property]
-    public void An_excluded_bid_changes_no_other_bids_quality_points_and_an_absolute_formula_no_other_price_score(int seed)
+    public void An_excluded_bid_changes_no_other_bids_quality_points_or_price_score(int seed)
     {
         var (plan, bids) = Draw(seed);
         var with = PointsAward.Compute(plan, bids);

@@ -52,6 +52,9 @@ public sealed class PointsAwardTests
         Assert.Contains("60", low.ExclusionDetail);
         Assert.Null(low.Rank);
         Assert.Equal(AwardExclusion.BelowCriterionMinimum, award.Bids.Single(x => x.Id == "weak-service").Excluded);
+        Assert.StartsWith("criterion 2 scored 3", award.Bids.Single(x => x.Id == "weak-service").ExclusionDetail);
+        var named = PointsAward.Compute(plan with { CriterionNames = ["Technical", "Service", "Risk"] }, [new AwardBid("weak-service", [10, 3, 10], 60)]);
+        Assert.StartsWith("\"Service\" scored 3, below the minimum of 4", named.Bids[0].ExclusionDetail);
 
         // The excluded bids' lower prices take no part: A (100) is the lowest admissible and gets all 40 points.
         Assert.Equal(40, award.Bids.Single(x => x.Id == "A").PricePoints!.Value, Tolerance);

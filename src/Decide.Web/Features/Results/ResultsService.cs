@@ -40,12 +40,12 @@ public sealed class ResultsService(
         var (summary, file) = await ComposeAsync(id, ct);
         var run = await Task.Run(() => DecisionRun.Of(file.Evaluation), ct);
         await AuditViewAsync(id, "ranking " + string.Join(" > ", run.Analysis.Ranking.Select(r => r.Alternative)), ct);
-        return new RankedEvaluation(summary, file, run.Prepared, run.Analysis);
+        return new RankedEvaluation(summary, file, run);
     }
 
     /// <summary>The robustness checks (sensitivity, rank acceptability, panel agreement) of a ranking, on a worker thread.</summary>
     public static Task<RobustnessResult> CheckRobustnessAsync(RankedEvaluation ranked, RobustnessOptions options, CancellationToken ct = default) =>
-        Task.Run(() => new DecisionRun(ranked.Prepared, ranked.Analysis, null).WithRobustness(options).Robustness!, ct);
+        Task.Run(() => ranked.Run.WithRobustness(options).Robustness!, ct);
 
     /// <summary>
     /// Results are visible to the facilitator, the observer, the approver and the assessors once moderation has
