@@ -90,14 +90,15 @@ public sealed class AnalyseCommand
     public int Execute(string file, AnalyseOutput output, RobustnessOptions? robustness) => CommandGuard.Run(_stderr, () =>
     {
         var input = CommandGuard.ReadEvaluation(file);
-        var (_, result, checks) = DecisionRun.Of(input.Evaluation, robustness);
+        var run = DecisionRun.Of(input.Evaluation, robustness);
+        var (_, result, checks) = run;
         if (output == AnalyseOutput.Table)
         {
-            TableRenderer.Render(input, result, checks, _stdout);
+            TableRenderer.Render(input, run, _stdout);
         }
         else
         {
-            _stdout.Write(ResultsWriter.ToJson(result, input.Evaluation, checks));
+            _stdout.Write(ResultsWriter.ToJson(ResultsWriter.CreateDocument(run, input.Evaluation)));
         }
 
         return ExitCodes.Success;

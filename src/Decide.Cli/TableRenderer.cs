@@ -1,4 +1,5 @@
 using System.Globalization;
+using Decide.Core;
 using Decide.Core.Weighting;
 using Decide.Core.Analysis;
 using Decide.Core.Fuzzy;
@@ -20,14 +21,14 @@ public static class TableRenderer
 
     /// <summary>Writes the tables for <paramref name="result"/>, naming things as <paramref name="file"/> does.</summary>
     /// <param name="file">The evaluation file analysed.</param>
-    /// <param name="result">The analysis.</param>
-    /// <param name="robustness">The robustness of the same analysis, or null when it was not run.</param>
+    /// <param name="run">The analysis, its robustness when it was run, and the published award when the plan states one.</param>
     /// <param name="output">Where to write.</param>
-    public static void Render(EvaluationFile file, AnalysisResult result, RobustnessResult? robustness, TextWriter output)
+    public static void Render(EvaluationFile file, DecisionRun run, TextWriter output)
     {
         ArgumentNullException.ThrowIfNull(file);
-        ArgumentNullException.ThrowIfNull(result);
+        ArgumentNullException.ThrowIfNull(run);
         ArgumentNullException.ThrowIfNull(output);
+        var (result, robustness) = (run.Analysis, run.Robustness);
         var e = file.Evaluation;
         var meta = file.Metadata;
         var alternatives = e.Alternatives.GroupBy(a => a.Id).ToDictionary(g => g.Key, g => g.First().Name);
@@ -56,11 +57,12 @@ public static class TableRenderer
         if (result.Excluded.Count > 0)
         {
             output.WriteLine();
-            output.WriteLine("Excluded (failed a pass/fail gate)");
+            output.WriteLine("Excluded (failed a pass/fail gate, or excluded by the published award)");
             foreach (var x in result.Excluded)
             {
                 var gates = string.Join("; ", x.Gates.Select(g => $"{criteria.GetValueOrDefault(g, g)} ({g})"));
-                output.WriteLine($"  {x.Alternative} {alternatives.GetValueOrDefault(x.Alternative, x.Alternative)}: failed {gates}");
+                var why = x.Gates.Count > 0 ? $"failed {gates}" : x.Reason;
+                output.WriteLine($"  {x.Alternative} {alternatives.GetValueOrDefault(x.Alternative, x.Alternative)}: {why}");
             }
         }
 
@@ -78,6 +80,11 @@ public static class TableRenderer
         if (result.Consistency.Count > 0)
         {
             RenderConsistency(result.Consistency, output);
+        }
+
+        if (run.Award is { } award)
+        {
+            AwardRenderer.Render(file, award, run.AwardAgreement!, output);
         }
 
         if (robustness is not null)
@@ -133,9 +140,12 @@ public static class TableRenderer
         }
     }
 
-    private static string Weighting(WeightingMethod w) => w == WeightingMethod.Pairwise
-        ? "pairwise comparison weights (Buckley's geometric mean)"
-        : "importance-rating weights";
+    private static string Weighting(WeightingMethod w) => w switch
+    {
+        WeightingMethod.Pairwise => "pairwise comparison weights (Buckley's geometric mean)",
+        WeightingMethod.Points => "published points as crisp weights",
+        _ => "importance-rating weights",
+    };
 
     private static string Aggregation(AggregationRule a) => a == AggregationRule.Geometric
         ? "panel aggregated by weighted geometric mean"

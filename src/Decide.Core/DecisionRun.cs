@@ -23,6 +23,12 @@ public sealed record DecisionRun(PreparedEvaluation Prepared, AnalysisResult Ana
         return robustness is null ? run : run.WithRobustness(robustness);
     }
 
+    /// <summary>The published award applied, or null when the plan states no award method.</summary>
+    public Award.AwardReport? Award => Prepared.Award;
+
+    /// <summary>How the points award and the closeness ranking agree, or null when the plan states no award method.</summary>
+    public Award.AwardAgreement? AwardAgreement => Award is null ? null : Core.Award.AwardAgreement.Of(Award, Analysis);
+
     /// <summary>The same run with its robustness checked (or checked again with other settings).</summary>
     public DecisionRun WithRobustness(RobustnessOptions options) =>
         this with { Robustness = RobustnessAnalysis.Run(Prepared, Analysis, options) };

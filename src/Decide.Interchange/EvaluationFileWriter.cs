@@ -115,12 +115,23 @@ public static class EvaluationFileWriter
         w.WriteEndArray();
 
         w.WriteString("weighting", FormatWords.Of(e.Weighting));
+        if (e.Points is { } points)
+        {
+            AwardWriter.WritePoints(w, points);
+        }
+
+        if (e.Award is { } award)
+        {
+            AwardWriter.WriteMethod(w, award);
+        }
+
         WriteImportance(w, e.Importance);
         WritePairwise(w, e.Pairwise, e.PairwiseScale);
         WriteRatings(w, e.Ratings);
         WriteModeration(w, e.Moderated);
         WriteValues(w, e.Values);
         WriteGates(w, e.Gates);
+        AwardWriter.WriteReviews(w, e.LowPriceReviews);
 
         WriteOptions(w, e.Options);
         w.WriteEndObject();

@@ -1,3 +1,4 @@
+using Decide.Core.Award;
 using Decide.Core.Model;
 
 namespace Decide.Interchange;
@@ -17,9 +18,34 @@ public static class FormatWords
     public static IReadOnlyList<(string Name, Direction Value)> Directions { get; } =
         [("benefit", Direction.Benefit), ("cost", Direction.Cost)];
 
-    /// <summary>Weighting methods: <c>importance</c>, <c>pairwise</c>.</summary>
+    /// <summary>Weighting methods: <c>importance</c>, <c>pairwise</c>, <c>points</c>.</summary>
     public static IReadOnlyList<(string Name, WeightingMethod Value)> Weightings { get; } =
-        [("importance", WeightingMethod.Importance), ("pairwise", WeightingMethod.Pairwise)];
+        [("importance", WeightingMethod.Importance), ("pairwise", WeightingMethod.Pairwise), ("points", WeightingMethod.Points)];
+
+    /// <summary>Price formulas of the award.</summary>
+    public static IReadOnlyList<(string Name, PriceFormula Value)> PriceFormulas { get; } =
+    [
+        ("lowest-price-ratio", PriceFormula.LowestPriceRatio), ("linear-from-lowest", PriceFormula.LinearFromLowest),
+        ("lowest-highest", PriceFormula.LowestHighestInterpolation), ("budget", PriceFormula.BudgetBased),
+        ("value-for-money", PriceFormula.ValueForMoney), ("quality-adjusted-price", PriceFormula.QualityAdjustedPrice),
+        ("lowest-price-acceptable", PriceFormula.LowestPriceAcceptable),
+    ];
+
+    /// <summary>Which result binds: <c>points</c>, <c>closeness</c>.</summary>
+    public static IReadOnlyList<(string Name, BindingResult Value)> Bindings { get; } =
+        [("points", BindingResult.Points), ("closeness", BindingResult.Closeness)];
+
+    /// <summary>How the panel's terms become one score: <c>mean</c>, <c>moderated</c>.</summary>
+    public static IReadOnlyList<(string Name, PanelScoreRule Value)> PanelScores { get; } =
+        [("mean", PanelScoreRule.Mean), ("moderated", PanelScoreRule.Moderated)];
+
+    /// <summary>Tie-break rules: <c>higher-quality</c>, <c>lower-price</c>, <c>earlier-submission</c>.</summary>
+    public static IReadOnlyList<(string Name, TieBreak Value)> TieBreaks { get; } =
+        [("higher-quality", TieBreak.HigherQuality), ("lower-price", TieBreak.LowerPrice), ("earlier-submission", TieBreak.EarlierSubmission)];
+
+    /// <summary>Decisions about an abnormally low price: <c>accepted</c>, <c>rejected</c>.</summary>
+    public static IReadOnlyList<(string Name, LowPriceDecision Value)> LowPriceDecisions { get; } =
+        [("accepted", LowPriceDecision.Accepted), ("rejected", LowPriceDecision.Rejected)];
 
     /// <summary>Aggregation rules: <c>mean</c>, <c>geometric</c>.</summary>
     public static IReadOnlyList<(string Name, AggregationRule Value)> Aggregations { get; } =
@@ -50,6 +76,21 @@ public static class FormatWords
 
     /// <summary>The file's word for the acceptability weights.</summary>
     public static string Of(AcceptabilityWeights value) => Word(AcceptabilityWeightings, value);
+
+    /// <summary>The file's word for a price formula.</summary>
+    public static string Of(PriceFormula value) => Word(PriceFormulas, value);
+
+    /// <summary>The file's word for the binding result.</summary>
+    public static string Of(BindingResult value) => Word(Bindings, value);
+
+    /// <summary>The file's word for the panel score rule.</summary>
+    public static string Of(PanelScoreRule value) => Word(PanelScores, value);
+
+    /// <summary>The file's word for a tie-break rule.</summary>
+    public static string Of(TieBreak value) => Word(TieBreaks, value);
+
+    /// <summary>The file's word for a decision about an abnormally low price.</summary>
+    public static string Of(LowPriceDecision value) => Word(LowPriceDecisions, value);
 
     /// <summary>The value a word stands for in <paramref name="table"/>, or <paramref name="fallback"/> when it is not one of them.</summary>
     public static T Parse<T>(IReadOnlyList<(string Name, T Value)> table, string? word, T fallback)

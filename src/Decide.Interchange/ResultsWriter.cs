@@ -2,6 +2,8 @@ using System.Reflection;
 using System.Text;
 using System.Text.Encodings.Web;
 using System.Text.Json;
+using Decide.Core;
+using Decide.Core.Award;
 using Decide.Core.Weighting;
 using Decide.Core.Analysis;
 using Decide.Core.Consistency;
@@ -16,7 +18,7 @@ namespace Decide.Interchange;
 /// JSON, camelCase member names, invariant culture, numbers written so they read back to the same double.
 /// </summary>
 /// <remarks>
-/// Build the document with <see cref="CreateDocument"/>, add later sections with <c>with { … }</c>, and write it
+/// Build the document with <see cref="CreateDocument(DecisionRun, Evaluation)"/>, add later sections with <c>with { … }</c>, and write it
 /// with <see cref="ToJson(ResultsDocument)"/> or <see cref="Write"/>.
 /// </remarks>
 public static class ResultsWriter
@@ -39,7 +41,9 @@ public static class ResultsWriter
     /// The robustness of the same analysis, from <see cref="RobustnessAnalysis.Run"/>; when given, the document gets
     /// its <c>sensitivity</c>, <c>agreement</c> and <c>summary</c> sections.
     /// </param>
-    public static ResultsDocument CreateDocument(AnalysisResult result, Evaluation evaluation, RobustnessResult? robustness = null)
+    /// <param name="award">The published award applied and its agreement with the ranking, when the plan states an award method.</param>
+    public static ResultsDocument CreateDocument(
+        AnalysisResult result, Evaluation evaluation, RobustnessResult? robustness = null, (AwardReport Report, AwardAgreement Agreement)? award = null)
     {
         ArgumentNullException.ThrowIfNull(result);
         ArgumentNullException.ThrowIfNull(evaluation);
@@ -60,7 +64,7 @@ public static class ResultsWriter
             Ranking = result.Ranking.Select(r => new RankingEntry(
                 r.Alternative, AlternativeName(r.Alternative), r.Rank, r.Closeness, r.DPlus, r.DMinus,
                 r.Contributions.Select(c => new ContributionEntry(c.Criterion, c.DPlus, c.DMinus)).ToArray())).ToArray(),
-            Excluded = result.Excluded.Select(x => new ExcludedEntry(x.Alternative, AlternativeName(x.Alternative), x.Gates.ToArray())).ToArray(),
+            Excluded = result.Excluded.Select(x => new ExcludedEntry(x.Alternative, AlternativeName(x.Alternative), x.Gates.ToArray(), x.Reason)).ToArray(),
             Weights = result.Weights.Select(w => new WeightEntry(
                 w.Criterion, CriterionName(w.Criterion), w.Fuzzy.ToArray(), w.Crisp, w.Group,
                 w.GroupWeight?.ToArray(), w.Local?.ToArray())).ToArray(),
@@ -71,7 +75,45 @@ public static class ResultsWriter
             Sensitivity = robustness is null ? null : RobustnessSections.Sensitivity(robustness.Sensitivity, CriterionName),
             Agreement = robustness is null ? null : RobustnessSections.Agreement(robustness.Agreement),
             Summary = robustness?.Summary.ToArray(),
+            PointsAward = award is { } a ? Award(a.Report, a.Agreement, evaluation, AlternativeName, CriterionName) : null,
         };
+    }
+
+    /// <summary>The results document of a whole run: analysis, robustness when run, and the award when the plan states one.</summary>
+    public static ResultsDocument CreateDocument(DecisionRun run, Evaluation evaluation)
+    {
+        ArgumentNullException.ThrowIfNull(run);
+        return CreateDocument(run.Analysis, evaluation, run.Robustness, run.Award is { } report ? (report, run.AwardAgreement!) : null);
+    }
+
+    private static AwardSection Award(AwardReport award, AwardAgreement agreement, Evaluation evaluation, Func<string, string> alternativeName, Func<string, string> criterionName)
+    {
+        var f = award.Formula;
+        return new AwardSection(
+            FormatWords.Of(award.Method.Binding),
+            FormatWords.Of(award.Method.PanelScore),
+            new FormulaEntry(FormatWords.Of(award.Method.Formula), f.Name, f.Equation, f.Properties, f.Source, f.Relative),
+            award.PricePoints,
+            award.ScaleMaximum,
+            award.QualityCriteria.Select((id, j) => new AwardCriterionEntry(id, criterionName(id), award.CriterionPoints[j])).ToArray(),
+            AwardText.Thresholds(award.Method, evaluation),
+            award.Method.AppliedTieBreaks.Select(FormatWords.Of).ToArray(),
+            award.Lines.Select(line =>
+            {
+                var b = line.Award;
+                return new AwardBidEntry(
+                    b.Id, alternativeName(b.Id),
+                    line.Cells.Select((c, j) => new AwardCellEntry(c.Criterion, c.Score, c.Source == PanelScoreSource.Moderated ? "moderated" : "mean", c.Term, c.Terms.ToArray(), b.CriterionPoints[j])).ToArray(),
+                    b.QualityPoints, b.QualityShare, b.Price, b.PricePoints, b.Figure, b.Total, b.Rank,
+                    b.Excluded is { } why ? AwardText.Exclusion(why) : null, b.ExclusionDetail, b.AbnormallyLowFlag,
+                    line.Review is { } r ? new LowPriceReviewEntry(r.Asked, r.Answer, r.Decision is { } d ? FormatWords.Of(d) : null, r.Reasons) : null,
+                    b.DecidedBy is { } rule ? FormatWords.Of(rule) : null);
+            }).ToArray(),
+            award.Result.PricesSealed,
+            award.Result.UnresolvedTie,
+            award.AwaitingDecision.ToArray(),
+            agreement.Winner,
+            new AwardAgreementEntry(agreement.PointsWinner, agreement.ClosenessWinner, agreement.SameWinner, agreement.KendallTau, agreement.Compared));
     }
 
     /// <summary>The results document for an analysis (and, when given, its robustness) as JSON text.</summary>

@@ -53,6 +53,27 @@ public sealed class AnalyseCommandTests : IDisposable
     }
 
     [Fact]
+    public void Table_output_of_a_points_award_prints_the_table_a_bidder_can_recompute()
+    {
+        var run = CliRun.Of("analyse", RepositoryFiles.PointsSample, "--format", "table", "--no-robustness");
+
+        Assert.Equal(0, run.ExitCode);
+        var lines = run.Stdout.Split('\n').Select(l => l.TrimEnd()).ToArray();
+        Assert.Contains("Award by published points (binding)", lines);
+        Assert.Contains(lines, l => l.Contains("S = Smax × Pmin / P", StringComparison.Ordinal) && l.Contains("Smax = 40", StringComparison.Ordinal));
+
+        // Cobble Hill, worked with a calculator from the sample: method (9+8+9)/3 = 8.667 → 8.667/10 × 25 = 21.67;
+        // staffing 8.333 → 12.50; environment 8.333 → 8.33; social moderated 7 → 7.00; quality 49.50;
+        // price 40 × 298,000 / 436,200 = 27.33; total 76.83; rank 1.
+        var row = Assert.Single(lines, l => l.TrimStart().StartsWith("cobblehill ", StringComparison.Ordinal));
+        Assert.Equal(["cobblehill", "8.67→21.67", "8.33→12.50", "8.33→8.33", "7→7.00*", "49.50", "436,200", "27.33", "76.83", "1"],
+            row.Split(' ', StringSplitOptions.RemoveEmptyEntries));
+        Assert.Contains(lines, l => l.Contains("Excluded: fernbrook", StringComparison.Ordinal) && l.Contains("below the minimum of 4", StringComparison.Ordinal));
+        Assert.Contains(lines, l => l.Contains("Abnormally low: quickcut", StringComparison.Ordinal) && l.Contains("explanation accepted", StringComparison.Ordinal));
+        Assert.Contains("  Winner under the binding result: cobblehill Cobble Hill Horticulture.", lines);
+    }
+
+    [Fact]
     public void Table_rows_follow_the_ranking_in_the_json()
     {
         using var json = JsonDocument.Parse(CliRun.Of("analyse", RepositoryFiles.MinimalExample).Stdout);

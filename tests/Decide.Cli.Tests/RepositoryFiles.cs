@@ -8,6 +8,8 @@ internal static class RepositoryFiles
 
     public static string MinimalExample => Path.Combine(Root, "docs", "examples", "minimal.json");
 
+    public static string PointsSample => Path.Combine(Root, "samples", "park-grounds-points.json");
+
     public static string BusStopSample => Path.Combine(Root, "samples", "bus-stop-displays-importance.json");
 
     private static string FindRoot()

@@ -9,7 +9,7 @@ public sealed class BuiltInScaleTests
     [Fact]
     public void The_documented_built_in_names_are_the_ones_the_engine_knows()
     {
-        Assert.Equal(["chen-importance-7", "chen-rating-7", "importance-5", "pairwise-9", "rating-5"], BuiltInScales.ByName.Keys.Order());
+        Assert.Equal(["chen-importance-7", "chen-rating-7", "importance-5", "pairwise-9", "points-0-10", "points-0-5", "rating-5"], BuiltInScales.ByName.Keys.Order());
     }
 
     [Theory]

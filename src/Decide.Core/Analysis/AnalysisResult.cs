@@ -42,8 +42,15 @@ public sealed record RankedAlternative(
 /// <summary>One criterion's terms of an alternative's distances.</summary>
 public sealed record CriterionDistance(string Criterion, double DPlus, double DMinus);
 
-/// <summary>An alternative removed before normalisation because it failed one or more gates.</summary>
-public sealed record ExcludedAlternative(string Alternative, IReadOnlyList<string> Gates);
+/// <summary>
+/// An alternative removed before normalisation: it failed one or more gates, or the published award excludes it (a
+/// quality threshold it missed, a price rejected as abnormally low, a price over the budget) and so it leaves every
+/// normalisation and price base.
+/// </summary>
+/// <param name="Alternative">Alternative id.</param>
+/// <param name="Gates">The gates it failed (may be empty when the award excludes it).</param>
+/// <param name="Reason">Why the award excludes it, in words; null when only gates exclude it.</param>
+public sealed record ExcludedAlternative(string Alternative, IReadOnlyList<string> Gates, string? Reason = null);
 
 /// <summary>One cell of the decision matrix.</summary>
 /// <param name="Alternative">Alternative id.</param>

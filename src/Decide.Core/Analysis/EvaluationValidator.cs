@@ -65,6 +65,7 @@ public static class EvaluationValidator
             }
 
             GeometricAggregation();
+            _found.AddRange(Award.AwardChecks.Plan(e));
             if (planOnly)
             {
                 return;
@@ -84,6 +85,7 @@ public static class EvaluationValidator
             Values(excluded);
             var moderated = Moderation();
             Ratings(excluded, moderated);
+            _found.AddRange(Award.AwardChecks.Inputs(e));
         }
 
         private void Add(string path, string reason) => _found.Add(new EvaluationError(path, reason));

@@ -1,4 +1,5 @@
 using Decide.Core.Aggregation;
+using Decide.Core.Award;
 using Decide.Core.Fuzzy;
 using Decide.Core.Model;
 using Decide.Core.Ranking;
@@ -16,10 +17,12 @@ public sealed class PreparedEvaluation
     internal PreparedEvaluation(Evaluation source)
     {
         Source = source;
+        Award = source.Award is null ? null : AwardAnalysis.Compute(source);
+        var byAward = Award?.ExcludedByAward.ToDictionary(b => b.Id, b => b.ExclusionDetail, StringComparer.Ordinal) ?? [];
         var excluded = source.Alternatives
             .Select(a => new ExcludedAlternative(a.Id, source.Gates.Where(g => g.Alternative == a.Id && !g.Passed)
-                .Select(g => g.Criterion).OrderBy(id => IndexOfCriterion(source, id)).ToArray()))
-            .Where(x => x.Gates.Count > 0)
+                .Select(g => g.Criterion).OrderBy(id => IndexOfCriterion(source, id)).ToArray(), byAward.GetValueOrDefault(a.Id)))
+            .Where(x => x.Gates.Count > 0 || x.Reason is not null)
             .ToArray();
         var excludedIds = excluded.Select(x => x.Alternative).ToHashSet(StringComparer.Ordinal);
         Excluded = excluded;
@@ -82,11 +85,14 @@ public sealed class PreparedEvaluation
     /// <summary>The evaluation this was prepared from.</summary>
     public Evaluation Source { get; }
 
-    /// <summary>Alternatives that passed every gate, in input order.</summary>
+    /// <summary>Alternatives that passed every gate and are not excluded by the award, in input order.</summary>
     public IReadOnlyList<Alternative> Alternatives { get; }
 
-    /// <summary>Alternatives that failed a gate.</summary>
+    /// <summary>Alternatives that failed a gate or that the published award excludes (thresholds, abnormally low, over budget).</summary>
     public IReadOnlyList<ExcludedAlternative> Excluded { get; }
+
+    /// <summary>The published award applied to the evaluation, or null when the plan states no award method.</summary>
+    public AwardReport? Award { get; }
 
     /// <summary>Scored (non-gate) criteria, in input order.</summary>
     public IReadOnlyList<Criterion> Criteria { get; }

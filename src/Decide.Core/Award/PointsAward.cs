@@ -51,9 +51,10 @@ public sealed record AwardPlan(
 /// <summary>One bid as the award sees it.</summary>
 /// <param name="Id">The bid's code.</param>
 /// <param name="Scores">The panel's score per quality criterion, on the scale (the mean of the assessors' points or the moderated value).</param>
-/// <param name="Price">The bid's price (positive).</param>
+/// <param name="Price">The bid's price (positive), or null while prices are sealed (the quality stage of a two-stage award).</param>
 /// <param name="RejectedAsAbnormallyLow">True when the facilitator recorded the decision to reject the price as abnormally low.</param>
-public sealed record AwardBid(string Id, IReadOnlyList<double> Scores, double Price, bool RejectedAsAbnormallyLow = false);
+/// <param name="FailedGate">The pass/fail gate the bid failed, in words, or null when it passed every gate.</param>
+public sealed record AwardBid(string Id, IReadOnlyList<double> Scores, double? Price, bool RejectedAsAbnormallyLow = false, string? FailedGate = null);
 
 /// <summary>Why a bid takes no part in the award.</summary>
 public enum AwardExclusion
@@ -69,6 +70,9 @@ public enum AwardExclusion
 
     /// <summary>Above the budget of a budget-based price rule.</summary>
     OverBudget,
+
+    /// <summary>Failed a pass/fail gate of the plan.</summary>
+    FailedGate,
 }
 
 /// <summary>One bid's award: every part a bidder needs to recompute its total with a calculator.</summary>
@@ -76,7 +80,7 @@ public enum AwardExclusion
 /// <param name="CriterionPoints">Quality points per criterion: score ÷ scale maximum × the criterion's points.</param>
 /// <param name="QualityPoints">Their sum.</param>
 /// <param name="QualityShare">Quality points ÷ all quality points.</param>
-/// <param name="Price">The bid's price.</param>
+/// <param name="Price">The bid's price, or null while prices are sealed.</param>
 /// <param name="PricePoints">Price points, when the formula gives points and the bid reached price scoring.</param>
 /// <param name="Figure">The ranking figure (lowest first) of a formula that gives no points.</param>
 /// <param name="Total">Quality points + price points, for a formula that gives points.</param>
@@ -86,12 +90,18 @@ public enum AwardExclusion
 /// <param name="AbnormallyLowFlag">Why its price is flagged as abnormally low, or null.</param>
 /// <param name="DecidedBy">The tie-break that placed this bid above the next one, when the main figure was equal.</param>
 public sealed record AwardedBid(
-    string Id, IReadOnlyList<double> CriterionPoints, double QualityPoints, double QualityShare, double Price,
+    string Id, IReadOnlyList<double> CriterionPoints, double QualityPoints, double QualityShare, double? Price,
     double? PricePoints, double? Figure, double? Total, int? Rank, AwardExclusion? Excluded, string? ExclusionDetail,
     string? AbnormallyLowFlag, TieBreak? DecidedBy);
 
 /// <summary>The award: every bid in the order given, and whether a tie remained after every tie-break.</summary>
-public sealed record AwardResult(IReadOnlyList<AwardedBid> Bids, bool UnresolvedTie)
+/// <param name="Bids">Every bid, in the order given.</param>
+/// <param name="UnresolvedTie">True when bids were still tied after every tie-break.</param>
+/// <param name="PricesSealed">
+/// True when the quality stage is done but prices are sealed: quality points and thresholds are final, nothing is
+/// ranked and no price is scored or flagged.
+/// </param>
+public sealed record AwardResult(IReadOnlyList<AwardedBid> Bids, bool UnresolvedTie, bool PricesSealed = false)
 {
     /// <summary>The bids in the running, best first.</summary>
     public IEnumerable<AwardedBid> Ranking => Bids.Where(b => b.Rank is not null).OrderBy(b => b.Rank);
@@ -126,7 +136,7 @@ public static class PointsAward
                 throw new ArgumentException($"Bid {bid.Id} has {bid.Scores.Count} scores for {m} criteria.", nameof(bids));
             }
 
-            if (!(bid.Price > 0 && double.IsFinite(bid.Price)))
+            if (bid.Price is { } price && !(price > 0 && double.IsFinite(price)))
             {
                 throw new ArgumentException($"Bid {bid.Id} has no positive price.", nameof(bids));
             }
@@ -141,9 +151,15 @@ public static class PointsAward
             rows[b] = new Row(b, bid, points, quality, total > 0 ? quality / total : 0);
         }
 
-        // 2. Thresholds, before price.
+        // 2. Gates and thresholds, before price.
         foreach (var row in rows)
         {
+            if (row.Bid.FailedGate is { } gate)
+            {
+                row.Exclude(AwardExclusion.FailedGate, Invariant($"failed the pass/fail gate {gate}"));
+                continue;
+            }
+
             if (plan.MinimumScores is { } minimum)
             {
                 for (var j = 0; j < m; j++)
@@ -162,8 +178,15 @@ public static class PointsAward
             }
         }
 
-        // 3. Abnormally low prices, among the bids that passed quality.
+        // 3. Abnormally low prices, among the bids that passed quality; nothing more while prices are sealed.
         var passed = rows.Where(r => r.Excluded is null).ToArray();
+        if (passed.Any(r => r.Bid.Price is null))
+        {
+            return new AwardResult(rows.Select(r => new AwardedBid(
+                r.Bid.Id, r.Points, r.Quality, r.Share, null, null, null, null, null, r.Excluded, r.Detail, null, null)).ToArray(),
+                UnresolvedTie: false, PricesSealed: true);
+        }
+
         if (plan.AbnormallyLow is { } low)
         {
             foreach (var row in passed)
@@ -181,15 +204,15 @@ public static class PointsAward
         var running = rows.Where(r => r.Excluded is null).ToList();
         if (plan.Price.Formula == PriceFormula.BudgetBased)
         {
-            foreach (var row in running.Where(r => r.Bid.Price > plan.Price.Budget))
+            foreach (var row in running.Where(r => r.OpenPrice > plan.Price.Budget))
             {
-                row.Exclude(AwardExclusion.OverBudget, Invariant($"price {row.Bid.Price:0.##} above the budget of {plan.Price.Budget:0.##}"));
+                row.Exclude(AwardExclusion.OverBudget, Invariant($"price {row.OpenPrice:0.##} above the budget of {plan.Price.Budget:0.##}"));
             }
 
             running.RemoveAll(r => r.Excluded is not null);
         }
 
-        var scores = PriceScoring.Score(plan.Price, running.Select(r => r.Bid.Price).ToArray(), running.Select(r => r.Quality).ToArray());
+        var scores = PriceScoring.Score(plan.Price, running.Select(r => r.OpenPrice).ToArray(), running.Select(r => r.Quality).ToArray());
         for (var i = 0; i < running.Count; i++)
         {
             running[i].Price = scores[i];
@@ -241,16 +264,16 @@ public static class PointsAward
     {
         if (rule.BelowMeanOfOthersPercent is { } percent && passed.Count > 1)
         {
-            var mean = passed.Where(r => !ReferenceEquals(r, row)).Average(r => r.Bid.Price);
-            if (row.Bid.Price < mean * (1 - (percent / 100)) - Tolerance)
+            var mean = passed.Where(r => !ReferenceEquals(r, row)).Average(r => r.OpenPrice);
+            if (row.OpenPrice < mean * (1 - (percent / 100)) - Tolerance)
             {
-                return Invariant($"{1 - (row.Bid.Price / mean):P1} below the mean of the other admissible prices ({mean:0.##}); the rule flags more than {percent / 100:P0}");
+                return Invariant($"{1 - (row.OpenPrice / mean):P1} below the mean of the other admissible prices ({mean:0.##}); the rule flags more than {percent / 100:P0}");
             }
         }
 
-        if (rule is { Estimate: { } estimate, BelowEstimatePercent: { } belowEstimate } && row.Bid.Price < estimate * (1 - (belowEstimate / 100)) - Tolerance)
+        if (rule is { Estimate: { } estimate, BelowEstimatePercent: { } belowEstimate } && row.OpenPrice < estimate * (1 - (belowEstimate / 100)) - Tolerance)
         {
-            return Invariant($"{1 - (row.Bid.Price / estimate):P1} below the estimate ({estimate:0.##}); the rule flags more than {belowEstimate / 100:P0}");
+            return Invariant($"{1 - (row.OpenPrice / estimate):P1} below the estimate ({estimate:0.##}); the rule flags more than {belowEstimate / 100:P0}");
         }
 
         return null;
@@ -284,7 +307,7 @@ public static class PointsAward
     private static int Prefer(TieBreak rule, Row x, Row y) => rule switch
     {
         TieBreak.HigherQuality => Math.Abs(x.Quality - y.Quality) <= Tolerance ? 0 : y.Quality.CompareTo(x.Quality),
-        TieBreak.LowerPrice => Math.Abs(x.Bid.Price - y.Bid.Price) <= Tolerance ? 0 : x.Bid.Price.CompareTo(y.Bid.Price),
+        TieBreak.LowerPrice => Math.Abs(x.OpenPrice - y.OpenPrice) <= Tolerance ? 0 : x.OpenPrice.CompareTo(y.OpenPrice),
         TieBreak.EarlierSubmission => x.Index.CompareTo(y.Index),
         _ => 0,
     };
@@ -295,6 +318,9 @@ public static class PointsAward
         public int Index { get; } = index;
 
         public AwardBid Bid { get; } = bid;
+
+        /// <summary>The price, once prices are open (the award reads it only after checking none is sealed).</summary>
+        public double OpenPrice => Bid.Price ?? double.NaN;
 
         public double[] Points { get; } = points;
 

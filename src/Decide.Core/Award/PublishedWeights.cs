@@ -10,7 +10,7 @@ namespace Decide.Core.Award;
 public sealed record PublishedWeights(double Total, IReadOnlyDictionary<string, double> Groups, IReadOnlyList<PublishedCriterion> Criteria)
 {
     /// <summary>Where the published weights sit in the portable file.</summary>
-    public const string Path = "$.weighting.points";
+    public const string Path = "$.publishedWeights";
 
     /// <summary>
     /// Every problem with the weights, by place: each value positive and finite, a group's criteria summing to the
@@ -81,6 +81,20 @@ public sealed record PublishedWeights(double Total, IReadOnlyDictionary<string, 
 
     /// <summary>Each criterion's share of the total (its points ÷ the total), in criterion order: the crisp weights the fuzzy analysis uses.</summary>
     public double[] Shares() => Criteria.Select(c => c.Points / Total).ToArray();
+
+    /// <summary>The points of criterion <paramref name="id"/>, or null when it has none.</summary>
+    public double? PointsOf(string id)
+    {
+        foreach (var c in Criteria)
+        {
+            if (c.Id == id)
+            {
+                return c.Points;
+            }
+        }
+
+        return null;
+    }
 }
 
 /// <summary>One criterion's published points.</summary>

@@ -31,6 +31,12 @@ public enum WeightingMethod
 
     /// <summary>Each assessor compares criteria in pairs; weights by Buckley's geometric mean (1985).</summary>
     Pairwise,
+
+    /// <summary>
+    /// Crisp points per group and criterion fixed in the plan and published with the tender; each criterion's weight
+    /// is its points ÷ the stated total, as the crisp triangle (s, s, s).
+    /// </summary>
+    Points,
 }
 
 /// <summary>How the panel's individual TFNs become one.</summary>

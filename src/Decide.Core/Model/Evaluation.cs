@@ -1,3 +1,4 @@
+using Decide.Core.Award;
 using Decide.Core.Fuzzy;
 using Decide.Core.Scales;
 
@@ -133,6 +134,15 @@ public sealed record Evaluation
 
     /// <summary>How criterion weights are derived.</summary>
     public WeightingMethod Weighting { get; init; } = WeightingMethod.Importance;
+
+    /// <summary>The published points per group and criterion (used when <see cref="Weighting"/> is points).</summary>
+    public PublishedWeights? Points { get; init; }
+
+    /// <summary>The published award method (price formula, thresholds, tie-breaks, stages), or null for a ranking by closeness alone.</summary>
+    public AwardMethod? Award { get; init; }
+
+    /// <summary>The records of prices flagged as abnormally low: what was asked, the answer and the decision.</summary>
+    public IReadOnlyList<LowPriceReview> LowPriceReviews { get; init; } = [];
 
     /// <summary>Importance ratings (used when <see cref="Weighting"/> is importance).</summary>
     public IReadOnlyList<ImportanceRating> Importance { get; init; } = [];

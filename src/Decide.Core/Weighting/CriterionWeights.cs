@@ -16,6 +16,7 @@ namespace Decide.Core.Weighting;
 /// <item>Importance: each node (group or criterion) gets the aggregated importance TFN. Within a group the local
 /// weights are divided by the sum of their centroids, so that a group's criteria share the group's weight rather
 /// than each receiving it whole; a top-level criterion keeps its aggregated importance (Chen 2000).</item>
+/// <item>Points: the published points, each criterion's weight its points ÷ the stated total (crisp).</item>
 /// <item>Pairwise: one matrix at the top level (groups and top-level criteria) and one per group; Buckley weights
 /// of the panel's matrix (element-wise weighted geometric mean of the assessors' matrices). A matrix of one item
 /// gives it (1, 1, 1).</item>
@@ -36,14 +37,19 @@ public static class CriterionWeights
     {
         Dictionary<string, Tfn> node;
         MatrixConsistency[] consistency;
-        if (evaluation.Weighting == WeightingMethod.Importance)
+        switch (evaluation.Weighting)
         {
-            node = FromImportance(evaluation, scored);
-            consistency = [];
-        }
-        else
-        {
-            (node, consistency) = FromPairwise(evaluation);
+            case WeightingMethod.Importance:
+                node = FromImportance(evaluation, scored);
+                consistency = [];
+                break;
+            case WeightingMethod.Points:
+                node = FromPoints(evaluation);
+                consistency = [];
+                break;
+            default:
+                (node, consistency) = FromPairwise(evaluation);
+                break;
         }
 
         var fuzzy = new Tfn[scored.Count];
@@ -104,6 +110,27 @@ public static class CriterionWeights
             {
                 node[c.Id] = total > 0 ? (1 / total) * node[c.Id] : Tfn.Zero;
             }
+        }
+
+        return node;
+    }
+
+    /// <summary>
+    /// Published points as crisp weights: a group's share of the total, and within it each criterion's share of the
+    /// group's points, so that their product is the criterion's points ÷ the total.
+    /// </summary>
+    private static Dictionary<string, Tfn> FromPoints(Evaluation e)
+    {
+        var points = e.Points ?? throw new InvalidOperationException("Points weighting without published points.");
+        var node = new Dictionary<string, Tfn>(StringComparer.Ordinal);
+        foreach (var (group, value) in points.Groups)
+        {
+            node[group] = Tfn.Crisp(value / points.Total);
+        }
+
+        foreach (var c in points.Criteria)
+        {
+            node[c.Id] = Tfn.Crisp(c.Points / (c.Group is { } g ? points.Groups[g] : points.Total));
         }
 
         return node;

@@ -24,7 +24,7 @@ internal sealed class EvaluationParser
     [
         "format", "title", "reference", "organisation", "description", "noun", "ratingScale", "importanceScale",
         "pairwiseScale", "groups", "criteria", "alternatives", "assessors", "weighting", "importance", "pairwise",
-        "ratings", "moderation", "values", "gates", "options",
+        "ratings", "moderation", "values", "gates", "options", "publishedWeights", "award", "lowPriceReviews",
     ];
 
     private static readonly string[] GroupMembers = ["id", "name"];
@@ -98,6 +98,7 @@ internal sealed class EvaluationParser
             weighting = top.Has("pairwise") && !top.Has("importance") ? WeightingMethod.Pairwise : WeightingMethod.Importance;
         }
 
+        var award = new AwardReader(_in);
         var evaluation = new Evaluation
         {
             Title = title,
@@ -116,6 +117,9 @@ internal sealed class EvaluationParser
             Values = Values(top),
             Gates = Gates(top),
             Options = Options(top),
+            Points = award.Points(top, criteria),
+            Award = award.Method(top),
+            LowPriceReviews = award.Reviews(top),
         };
 
         var errors = new List<EvaluationError>(_in.Errors);
@@ -576,7 +580,12 @@ internal sealed class EvaluationParser
             return true;
         }
 
-        if (_weightingUnreadable && path is "$.importance" or "$.pairwise")
+        if (_weightingUnreadable && path is "$.importance" or "$.pairwise" or "$.publishedWeights")
+        {
+            return true;
+        }
+
+        if (!_ratingScaleUsable && (path == "$.ratingScale" || path.StartsWith("$.award.thresholds.minimumTerms", StringComparison.Ordinal)))
         {
             return true;
         }

@@ -27,7 +27,7 @@ public sealed record ResultsDocument
     /// <summary>Alternatives still in the running, best first.</summary>
     public required IReadOnlyList<RankingEntry> Ranking { get; init; }
 
-    /// <summary>Alternatives that failed a gate, with the gates they failed.</summary>
+    /// <summary>Alternatives that failed a gate (with the gates) or that the published award excludes (with the reason).</summary>
     public required IReadOnlyList<ExcludedEntry> Excluded { get; init; }
 
     /// <summary>Every scored criterion's weight.</summary>
@@ -38,6 +38,9 @@ public sealed record ResultsDocument
 
     /// <summary>The decision matrix, cell by cell.</summary>
     public required IReadOnlyList<MatrixEntry> Matrix { get; init; }
+
+    /// <summary>The published points award applied, with the table a bidder can recompute; null when the plan states no award method.</summary>
+    public AwardSection? PointsAward { get; init; }
 
     /// <summary>How the ranking responds to changes of weights, ratings, panel, bid set and method; null when robustness was not run.</summary>
     public SensitivitySection? Sensitivity { get; init; }

@@ -135,4 +135,17 @@ public sealed class PointsAwardTests
     }
 
     private static int? Rank(AwardResult award, string id) => award.Bids.Single(x => x.Id == id).Rank;
+
+    [Fact]
+    public void While_prices_are_sealed_quality_and_thresholds_are_final_and_nothing_is_ranked_or_flagged()
+    {
+        var plan = Plan() with { MinimumQualityShare = 0.6, AbnormallyLow = new AbnormallyLowRule(10) };
+        var award = PointsAward.Compute(plan, [new AwardBid("A", [8, 6, 6], null), new AwardBid("low", [4, 5, 5], null)]);
+
+        Assert.True(award.PricesSealed);
+        Assert.All(award.Bids, b => Assert.Null(b.Rank));
+        Assert.All(award.Bids, b => Assert.Null(b.AbnormallyLowFlag));
+        Assert.Equal(AwardExclusion.BelowQualityThreshold, award.Bids[1].Excluded);
+        Assert.Equal(42, award.Bids[0].QualityPoints, 9);
+    }
 }

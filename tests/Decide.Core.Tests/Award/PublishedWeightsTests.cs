@@ -23,7 +23,7 @@ public sealed class PublishedWeightsTests
     {
         var errors = Example(service: 25).Validate();
         var error = Assert.Single(errors);
-        Assert.Equal("$.weighting.points.groups.quality", error.Path);
+        Assert.Equal("$.publishedWeights.groups.quality", error.Path);
         Assert.Contains("add up to 65", error.Reason);
     }
 
@@ -31,7 +31,7 @@ public sealed class PublishedWeightsTests
     public void A_top_level_that_misses_the_stated_total_is_refused_at_the_total()
     {
         var error = Assert.Single(Example(price: 30).Validate());
-        Assert.Equal("$.weighting.points.total", error.Path);
+        Assert.Equal("$.publishedWeights.total", error.Path);
         Assert.Contains("90", error.Reason);
     }
 
@@ -42,16 +42,16 @@ public sealed class PublishedWeightsTests
     public void A_criterion_without_positive_points_is_refused_by_its_place(double points)
     {
         var errors = Example(service: points).Validate();
-        Assert.Contains(errors, e => e.Path == "$.weighting.points.criteria.service");
+        Assert.Contains(errors, e => e.Path == "$.publishedWeights.criteria.service");
     }
 
     [Fact]
     public void A_criterion_in_a_group_without_points_and_a_group_without_criteria_are_both_named()
     {
         var unknown = new PublishedWeights(100, new Dictionary<string, double>(), [new("a", 100, "ghost")]).Validate();
-        Assert.Contains(unknown, e => e.Path == "$.weighting.points.criteria.a" && e.Reason.Contains("ghost"));
+        Assert.Contains(unknown, e => e.Path == "$.publishedWeights.criteria.a" && e.Reason.Contains("ghost"));
 
         var empty = new PublishedWeights(100, new Dictionary<string, double> { ["idle"] = 10 }, [new("a", 90)]).Validate();
-        Assert.Contains(empty, e => e.Path == "$.weighting.points.groups.idle");
+        Assert.Contains(empty, e => e.Path == "$.publishedWeights.groups.idle");
     }
 }

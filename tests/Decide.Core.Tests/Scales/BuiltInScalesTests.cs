@@ -100,12 +100,28 @@ public sealed class BuiltInScalesTests
     public void Every_built_in_scale_is_listed_by_its_name()
     {
         Assert.Equal(
-            ["chen-importance-7", "chen-rating-7", "importance-5", "pairwise-9", "rating-5"],
+            ["chen-importance-7", "chen-rating-7", "importance-5", "pairwise-9", "points-0-10", "points-0-5", "rating-5"],
             BuiltInScales.ByName.Keys.Order(StringComparer.Ordinal));
         foreach (var (name, scale) in BuiltInScales.ByName)
         {
             Assert.Equal(name, scale.Name);
         }
+    }
+
+    [Theory]
+    // The values docs/evaluation-format.md prints for the points scales (Decide's own construction, not a published table).
+    [InlineData("points-0-5", 0, "0", "Unacceptable", 0, 0, 0, 2)]
+    [InlineData("points-0-5", 3, "3", "Good", 3, 4, 6, 8)]
+    [InlineData("points-0-5", 5, "5", "Excellent", 5, 8, 10, 10)]
+    [InlineData("points-0-10", 0, "0", "None", 0, 0, 0, 1)]
+    [InlineData("points-0-10", 6, "6", "Satisfactory", 6, 5, 6, 7)]
+    [InlineData("points-0-10", 10, "10", "Outstanding", 10, 9, 10, 10)]
+    public void Points_scales_hold_the_documented_points_and_triangles(string name, int step, string code, string label, double points, double l, double m, double u)
+    {
+        var scale = BuiltInScales.ByName[name];
+        AssertTerm(scale, step, code, label, new Tfn(l, m, u));
+        Assert.Equal(points, scale[step].Points);
+        Assert.All(scale.Terms, t => Assert.False(string.IsNullOrWhiteSpace(t.Descriptor)));
     }
 
     private static void AssertTerm(LinguisticScale scale, int step, string code, string label, Tfn value)
