@@ -44,7 +44,7 @@ internal static class AwardRenderer
             var row = new List<string> { b.Id };
             row.AddRange(line.Cells.Select((c, j) => $"{F(c.Score)}→{F2(b.CriterionPoints[j])}{(c.Source == PanelScoreSource.Moderated ? "*" : "")}"));
             row.Add(F2(b.QualityPoints));
-            row.Add(b.Price is { } price ? price.ToString("#,0.##", CultureInfo.InvariantCulture) : award.Result.PricesSealed ? "sealed" : "");
+            row.Add(b.Price is { } price ? price.ToString("#,0.##", CultureInfo.InvariantCulture) : award.Result.PricesSealed ? "sealed" : award.Method.TwoStage ? "not opened" : "–");
             row.Add(formula.GivesPoints ? (b.PricePoints is { } points ? F2(points) : "–") : (b.Figure is { } figure ? F2(figure) : "–"));
             row.Add(b.Total is { } total ? F2(total) : "–");
             row.Add(b.Rank is { } rank ? rank.ToString(CultureInfo.InvariantCulture) : "excl.");

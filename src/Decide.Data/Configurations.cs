@@ -102,6 +102,20 @@ internal sealed class ModerationConfiguration : IEntityTypeConfiguration<Moderat
     }
 }
 
+internal sealed class LowPriceReviewConfiguration : IEntityTypeConfiguration<LowPriceReviewEntry>
+{
+    public void Configure(EntityTypeBuilder<LowPriceReviewEntry> e)
+    {
+        e.ToTable("low_price_reviews");
+        e.Property(x => x.Version).IsConcurrencyToken();
+        e.Property(x => x.Asked).HasMaxLength(8_000);
+        e.Property(x => x.Answer).HasMaxLength(20_000);
+        e.Property(x => x.Reasons).HasMaxLength(8_000);
+        e.Property(x => x.Decision).HasMaxLength(16);
+        e.HasIndex(x => new { x.EvaluationId, x.AlternativeCode }).IsUnique();
+    }
+}
+
 internal sealed class ApprovalConfiguration : IEntityTypeConfiguration<Approval>
 {
     public void Configure(EntityTypeBuilder<Approval> e)

@@ -38,6 +38,9 @@ public sealed class DecideDbContext(DbContextOptions<DecideDbContext> options)
 
     public DbSet<ModerationEntry> Moderation => Set<ModerationEntry>();
 
+    /// <summary>Reviews of prices flagged as abnormally low.</summary>
+    public DbSet<LowPriceReviewEntry> LowPriceReviews => Set<LowPriceReviewEntry>();
+
     public DbSet<Approval> Approvals => Set<Approval>();
 
     public DbSet<AuditEntry> Audit => Set<AuditEntry>();

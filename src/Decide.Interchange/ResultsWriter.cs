@@ -75,7 +75,7 @@ public static class ResultsWriter
             Sensitivity = robustness is null ? null : RobustnessSections.Sensitivity(robustness.Sensitivity, CriterionName),
             Agreement = robustness is null ? null : RobustnessSections.Agreement(robustness.Agreement),
             Summary = robustness?.Summary.ToArray(),
-            PointsAward = award is { } a ? Award(a.Report, a.Agreement, evaluation, AlternativeName, CriterionName) : null,
+            PointsAward = award is { } a ? AwardSection(a.Report, a.Agreement, evaluation) : null,
         };
     }
 
@@ -86,8 +86,18 @@ public static class ResultsWriter
         return CreateDocument(run.Analysis, evaluation, run.Robustness, run.Award is { } report ? (report, run.AwardAgreement!) : null);
     }
 
-    private static AwardSection Award(AwardReport award, AwardAgreement agreement, Evaluation evaluation, Func<string, string> alternativeName, Func<string, string> criterionName)
+    /// <summary>
+    /// The <c>pointsAward</c> section for an award and, once prices are open, its agreement with the closeness ranking:
+    /// the table a bidder can recompute. The API serves it alone for the quality stage of a two-stage award.
+    /// </summary>
+    public static AwardSection AwardSection(AwardReport award, AwardAgreement? agreement, Evaluation evaluation)
     {
+        ArgumentNullException.ThrowIfNull(award);
+        ArgumentNullException.ThrowIfNull(evaluation);
+        var alternativeNames = Names(evaluation.Alternatives.Select(a => (a.Id, a.Name)));
+        var criterionNames = Names(evaluation.Criteria.Select(c => (c.Id, c.Name)));
+        string alternativeName(string id) => alternativeNames.GetValueOrDefault(id, id);
+        string criterionName(string id) => criterionNames.GetValueOrDefault(id, id);
         var f = award.Formula;
         return new AwardSection(
             FormatWords.Of(award.Method.Binding),
@@ -112,8 +122,8 @@ public static class ResultsWriter
             award.Result.PricesSealed,
             award.Result.UnresolvedTie,
             award.AwaitingDecision.ToArray(),
-            agreement.Winner,
-            new AwardAgreementEntry(agreement.PointsWinner, agreement.ClosenessWinner, agreement.SameWinner, agreement.KendallTau, agreement.Compared));
+            agreement?.Winner ?? (award.Method.Binding == BindingResult.Points ? award.Winner : null),
+            agreement is null ? null : new AwardAgreementEntry(agreement.PointsWinner, agreement.ClosenessWinner, agreement.SameWinner, agreement.KendallTau, agreement.Compared));
     }
 
     /// <summary>The results document for an analysis (and, when given, its robustness) as JSON text.</summary>

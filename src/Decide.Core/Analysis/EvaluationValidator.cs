@@ -16,7 +16,7 @@ public static class EvaluationValidator
     {
         var v = new Walker(evaluation);
         v.Run();
-        return v.Errors;
+        return Award.AwardChecks.ExcusePricesOfExcluded(evaluation, v.Errors);
     }
 
     /// <summary>

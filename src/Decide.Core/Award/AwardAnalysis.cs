@@ -75,6 +75,28 @@ public static class AwardAnalysis
     /// <exception cref="InvalidOperationException">The evaluation has no award method or no published points.</exception>
     public static AwardReport Compute(Evaluation evaluation) => Compute(evaluation, evaluation.Assessors);
 
+    /// <summary>
+    /// The quality stage of a two-stage award while prices are sealed: the evaluation is checked as for analysis
+    /// except that the price criterion has no values yet, and the award is computed without prices (quality points and
+    /// thresholds final, nothing ranked).
+    /// </summary>
+    /// <exception cref="InvalidEvaluationException">The evaluation has problems other than the sealed prices; every one is listed.</exception>
+    /// <exception cref="InvalidOperationException">The evaluation has no award method.</exception>
+    public static AwardReport QualityStage(Evaluation evaluation)
+    {
+        ArgumentNullException.ThrowIfNull(evaluation);
+        var method = evaluation.Award ?? throw new InvalidOperationException("The evaluation states no award method.");
+        var sealedPrices = evaluation with { Values = evaluation.Values.Where(v => v.Criterion != method.PriceCriterion).ToArray() };
+        var pricePaths = evaluation.Alternatives.Select(a => JsonPath.Keys("$.values", a.Id, method.PriceCriterion)).ToHashSet(StringComparer.Ordinal);
+        var errors = Analysis.EvaluationValidator.Validate(sealedPrices).Where(e => !pricePaths.Contains(e.Path)).ToArray();
+        if (errors.Length > 0)
+        {
+            throw new InvalidEvaluationException(errors);
+        }
+
+        return Compute(sealedPrices);
+    }
+
     /// <summary>The award with the panel limited to <paramref name="panel"/> (leave-one-assessor-out and similar checks).</summary>
     public static AwardReport Compute(Evaluation evaluation, IReadOnlyList<Assessor> panel)
     {

@@ -43,11 +43,6 @@ internal static class AwardChecks
             yield break;
         }
 
-        foreach (var value in e.Values.Where(v => v.Criterion == award.PriceCriterion && !(v.Value > 0)))
-        {
-            yield return new(JsonPath.Keys("$.values", value.Alternative, value.Criterion), Invariant($"a price must be above 0 for the price formula; got {value.Value}"));
-        }
-
         var bids = e.Alternatives.Select(a => a.Id).ToHashSet(StringComparer.Ordinal);
         var seen = new HashSet<string>(StringComparer.Ordinal);
         foreach (var review in e.LowPriceReviews)
@@ -79,6 +74,31 @@ internal static class AwardChecks
                 yield return new(JsonPath.Key(at, "reasons"), "a decision about an abnormally low price needs its reasons, written so that the bidder can read them");
             }
         }
+    }
+
+    /// <summary>
+    /// A bid the award excludes before price (a gate, a threshold) needs no price: in two stages its price is never
+    /// opened. When the only problems left are such missing prices, they are dropped; otherwise nothing changes (the
+    /// quality stage cannot be computed on an evaluation with other problems).
+    /// </summary>
+    public static IReadOnlyList<EvaluationError> ExcusePricesOfExcluded(Evaluation e, IReadOnlyList<EvaluationError> errors)
+    {
+        if (e.Award is not { } award || errors.Count == 0)
+        {
+            return errors;
+        }
+
+        var missing = e.Alternatives.ToDictionary(a => JsonPath.Keys("$.values", a.Id, award.PriceCriterion), a => a.Id, StringComparer.Ordinal);
+        var priced = e.Values.Where(v => v.Criterion == award.PriceCriterion).Select(v => v.Alternative).ToHashSet(StringComparer.Ordinal);
+        var unpriced = errors.Where(x => missing.TryGetValue(x.Path, out var bid) && !priced.Contains(bid)).ToArray();
+        if (unpriced.Length == 0 || unpriced.Length != errors.Count)
+        {
+            return errors;
+        }
+
+        var quality = AwardAnalysis.Compute(e with { Values = e.Values.Where(v => v.Criterion != award.PriceCriterion).ToArray() });
+        var excluded = quality.Result.Bids.Where(b => b.Excluded is not null).Select(b => b.Id).ToHashSet(StringComparer.Ordinal);
+        return errors.Where(x => !(missing.TryGetValue(x.Path, out var bid) && excluded.Contains(bid))).ToArray();
     }
 
     private static IEnumerable<EvaluationError> Points(Evaluation e)

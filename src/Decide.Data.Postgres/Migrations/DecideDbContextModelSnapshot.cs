@@ -357,6 +357,69 @@ namespace Decide.Data.Postgres.Migrations
                     b.ToTable("gate_results", (string)null);
                 });
 
+            modelBuilder.Entity("Decide.Data.Entities.LowPriceReviewEntry", b =>
+                {
+                    b.Property<long>("Id")
+                        .ValueGeneratedOnAdd()
+                        .HasColumnType("bigint");
+
+                    NpgsqlPropertyBuilderExtensions.UseIdentityByDefaultColumn(b.Property<long>("Id"));
+
+                    b.Property<string>("AlternativeCode")
+                        .IsRequired()
+                        .HasMaxLength(4000)
+                        .HasColumnType("character varying(4000)");
+
+                    b.Property<string>("Answer")
+                        .HasMaxLength(20000)
+                        .HasColumnType("character varying(20000)");
+
+                    b.Property<DateTimeOffset?>("AnsweredAt")
+                        .HasColumnType("timestamp with time zone");
+
+                    b.Property<string>("Asked")
+                        .IsRequired()
+                        .HasMaxLength(8000)
+                        .HasColumnType("character varying(8000)");
+
+                    b.Property<DateTimeOffset>("AskedAt")
+                        .HasColumnType("timestamp with time zone");
+
+                    b.Property<string>("AskedBy")
+                        .IsRequired()
+                        .HasMaxLength(4000)
+                        .HasColumnType("character varying(4000)");
+
+                    b.Property<DateTimeOffset?>("DecidedAt")
+                        .HasColumnType("timestamp with time zone");
+
+                    b.Property<string>("DecidedBy")
+                        .HasMaxLength(4000)
+                        .HasColumnType("character varying(4000)");
+
+                    b.Property<string>("Decision")
+                        .HasMaxLength(16)
+                        .HasColumnType("character varying(16)");
+
+                    b.Property<Guid>("EvaluationId")
+                        .HasColumnType("uuid");
+
+                    b.Property<string>("Reasons")
+                        .HasMaxLength(8000)
+                        .HasColumnType("character varying(8000)");
+
+                    b.Property<long>("Version")
+                        .IsConcurrencyToken()
+                        .HasColumnType("bigint");
+
+                    b.HasKey("Id");
+
+                    b.HasIndex("EvaluationId", "AlternativeCode")
+                        .IsUnique();
+
+                    b.ToTable("low_price_reviews", (string)null);
+                });
+
             modelBuilder.Entity("Decide.Data.Entities.ModerationEntry", b =>
                 {
                     b.Property<long>("Id")
@@ -655,6 +718,13 @@ namespace Decide.Data.Postgres.Migrations
                     b.Property<Guid?>("PreviousRevisionId")
                         .HasColumnType("uuid");
 
+                    b.Property<DateTimeOffset?>("PricesOpenedAt")
+                        .HasColumnType("timestamp with time zone");
+
+                    b.Property<string>("PricesOpenedBy")
+                        .HasMaxLength(4000)
+                        .HasColumnType("character varying(4000)");
+
                     b.Property<bool>("PricesVisibleToAssessors")
                         .HasColumnType("boolean");
 
@@ -705,6 +775,9 @@ namespace Decide.Data.Postgres.Migrations
                         .IsRequired()
                         .HasMaxLength(300)
                         .HasColumnType("character varying(300)");
+
+                    b.Property<bool>("TwoStage")
+                        .HasColumnType("boolean");
 
                     b.Property<long>("Version")
                         .IsConcurrencyToken()

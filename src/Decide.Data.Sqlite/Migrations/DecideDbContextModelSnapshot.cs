@@ -344,6 +344,67 @@ namespace Decide.Data.Sqlite.Migrations
                     b.ToTable("gate_results", (string)null);
                 });
 
+            modelBuilder.Entity("Decide.Data.Entities.LowPriceReviewEntry", b =>
+                {
+                    b.Property<long>("Id")
+                        .ValueGeneratedOnAdd()
+                        .HasColumnType("INTEGER");
+
+                    b.Property<string>("AlternativeCode")
+                        .IsRequired()
+                        .HasMaxLength(4000)
+                        .HasColumnType("TEXT");
+
+                    b.Property<string>("Answer")
+                        .HasMaxLength(20000)
+                        .HasColumnType("TEXT");
+
+                    b.Property<DateTimeOffset?>("AnsweredAt")
+                        .HasColumnType("TEXT");
+
+                    b.Property<string>("Asked")
+                        .IsRequired()
+                        .HasMaxLength(8000)
+                        .HasColumnType("TEXT");
+
+                    b.Property<DateTimeOffset>("AskedAt")
+                        .HasColumnType("TEXT");
+
+                    b.Property<string>("AskedBy")
+                        .IsRequired()
+                        .HasMaxLength(4000)
+                        .HasColumnType("TEXT");
+
+                    b.Property<DateTimeOffset?>("DecidedAt")
+                        .HasColumnType("TEXT");
+
+                    b.Property<string>("DecidedBy")
+                        .HasMaxLength(4000)
+                        .HasColumnType("TEXT");
+
+                    b.Property<string>("Decision")
+                        .HasMaxLength(16)
+                        .HasColumnType("TEXT");
+
+                    b.Property<Guid>("EvaluationId")
+                        .HasColumnType("TEXT");
+
+                    b.Property<string>("Reasons")
+                        .HasMaxLength(8000)
+                        .HasColumnType("TEXT");
+
+                    b.Property<long>("Version")
+                        .IsConcurrencyToken()
+                        .HasColumnType("INTEGER");
+
+                    b.HasKey("Id");
+
+                    b.HasIndex("EvaluationId", "AlternativeCode")
+                        .IsUnique();
+
+                    b.ToTable("low_price_reviews", (string)null);
+                });
+
             modelBuilder.Entity("Decide.Data.Entities.ModerationEntry", b =>
                 {
                     b.Property<long>("Id")
@@ -632,6 +693,13 @@ namespace Decide.Data.Sqlite.Migrations
                     b.Property<Guid?>("PreviousRevisionId")
                         .HasColumnType("TEXT");
 
+                    b.Property<DateTimeOffset?>("PricesOpenedAt")
+                        .HasColumnType("TEXT");
+
+                    b.Property<string>("PricesOpenedBy")
+                        .HasMaxLength(4000)
+                        .HasColumnType("TEXT");
+
                     b.Property<bool>("PricesVisibleToAssessors")
                         .HasColumnType("INTEGER");
 
@@ -682,6 +750,9 @@ namespace Decide.Data.Sqlite.Migrations
                         .IsRequired()
                         .HasMaxLength(300)
                         .HasColumnType("TEXT");
+
+                    b.Property<bool>("TwoStage")
+                        .HasColumnType("INTEGER");
 
                     b.Property<long>("Version")
                         .IsConcurrencyToken()

@@ -156,6 +156,40 @@ public sealed class ModerationEntry
     public DateTimeOffset RecordedAt { get; set; }
 }
 
+/// <summary>
+/// The review of a price the published rule flagged as abnormally low: the explanation asked for, the bidder's
+/// answer and the facilitator's decision with reasons. Only a recorded rejection excludes the bid.
+/// </summary>
+public sealed class LowPriceReviewEntry : IVersioned
+{
+    public long Id { get; set; }
+
+    public Guid EvaluationId { get; set; }
+
+    public string AlternativeCode { get; set; } = "";
+
+    public string Asked { get; set; } = "";
+
+    public string AskedBy { get; set; } = "";
+
+    public DateTimeOffset AskedAt { get; set; }
+
+    public string? Answer { get; set; }
+
+    public DateTimeOffset? AnsweredAt { get; set; }
+
+    /// <summary><c>accepted</c> or <c>rejected</c> (the file's words), or null while undecided.</summary>
+    public string? Decision { get; set; }
+
+    public string? Reasons { get; set; }
+
+    public string? DecidedBy { get; set; }
+
+    public DateTimeOffset? DecidedAt { get; set; }
+
+    public long Version { get; set; }
+}
+
 /// <summary>An approver's approval of the evaluation (sign-off needs the plan's number of them).</summary>
 public sealed class Approval
 {

@@ -74,8 +74,29 @@ public static class StageRules
     /// <summary>Gate (pass/fail) results are recorded once the plan is fixed, until moderation.</summary>
     public static readonly StageRule RecordGate = new("record a gate result", PlanLocked, Scoring);
 
-    /// <summary>Numeric (price) values are entered while the panel scores.</summary>
+    /// <summary>
+    /// Numeric (price) values are entered while the panel scores; in a two-stage evaluation only after the prices
+    /// were opened, at moderation (<see cref="ValuesRefusal"/>).
+    /// </summary>
     public static readonly StageRule EnterValues = new("enter numeric values", Scoring);
+
+    /// <summary>Why values cannot be entered now, or null when they can.</summary>
+    public static string? ValuesRefusal(StoredEvaluation e)
+    {
+        if (e.TwoStage)
+        {
+            return e.PricesOpenedAt is null
+                ? $"Cannot enter prices: evaluation {e.Reference} is evaluated in two stages and its prices stay sealed until quality moderation is closed and the facilitator opens them."
+                : e.Stage == Moderation ? null : $"Cannot enter prices: evaluation {e.Reference} is at stage {e.Stage}; after opening, prices are entered at Moderation.";
+        }
+
+        return EnterValues.AllowsAt(e.Stage) ? null : EnterValues.Refusal(e.Reference, e.Stage);
+    }
+
+    /// <summary>Why quality (ratings, moderated values, reopened sheets) can no longer change, or null while it can.</summary>
+    public static string? QualityClosedRefusal(StoredEvaluation e) => e.QualityClosed
+        ? $"Cannot change the quality scores: evaluation {e.Reference} is evaluated in two stages and quality was closed when the prices were opened on {e.PricesOpenedAt:yyyy-MM-dd HH:mm} UTC."
+        : null;
 
     /// <summary>
     /// Ratings are entered at scoring, or at moderation on a sheet the facilitator reopened; a sheet is editable
@@ -90,6 +111,12 @@ public static class StageRules
 
     /// <summary>The panel's moderated value of a cell.</summary>
     public static readonly StageRule Moderate = new("record a moderated value", Moderation);
+
+    /// <summary>Two stages: prices are opened once quality moderation is done, before sign-off is asked for.</summary>
+    public static readonly StageRule OpenPrices = new("open the prices", Moderation);
+
+    /// <summary>The record of a price flagged as abnormally low: asked, answered and decided once prices are known.</summary>
+    public static readonly StageRule ReviewLowPrice = new("record the review of an abnormally low price", Scoring, Moderation);
 
     /// <summary>The facilitator asks the approvers once moderation is done.</summary>
     public static readonly StageRule AskSignOff = new("ask for sign-off", Moderation);
@@ -111,6 +138,9 @@ public static class StageRules
     /// </summary>
     public static bool ResultsVisible(StoredEvaluation e) =>
         e.Stage is Moderation or SignedOff || (e.Stage == Superseded && e.ModerationStartedAt is not null);
+
+    /// <summary>Whether prices may be shown: always in one stage; in two stages only once opened.</summary>
+    public static bool PricesVisible(StoredEvaluation e) => !e.PricesSealed;
 }
 
 /// <summary>A move between stages that <see cref="StageRules"/> does not allow from the evaluation's stage.</summary>

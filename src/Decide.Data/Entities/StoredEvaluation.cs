@@ -55,6 +55,24 @@ public sealed class StoredEvaluation : IVersioned
 
     public DateTimeOffset? SignedOffAt { get; private set; }
 
+    /// <summary>
+    /// True when the locked plan's award runs in two stages: prices stay sealed (not entered, not shown, not
+    /// exported) until quality moderation is closed and prices are opened. Fixed when the plan is locked.
+    /// </summary>
+    public bool TwoStage { get; private set; }
+
+    /// <summary>When prices were opened (two stages); ratings and moderated values are final from then on.</summary>
+    public DateTimeOffset? PricesOpenedAt { get; private set; }
+
+    /// <summary>Who opened the prices (a user id, or the import that brought them).</summary>
+    public string? PricesOpenedBy { get; private set; }
+
+    /// <summary>True while a two-stage evaluation's prices are sealed.</summary>
+    public bool PricesSealed => TwoStage && PricesOpenedAt is null;
+
+    /// <summary>True once a two-stage evaluation's prices are open: quality (ratings, moderation) is then closed.</summary>
+    public bool QualityClosed => TwoStage && PricesOpenedAt is not null;
+
     /// <summary>When the facilitator asked the approvers to sign off; approvals are accepted only after that.</summary>
     public DateTimeOffset? SignOffRequestedAt { get; set; }
 
@@ -81,11 +99,52 @@ public sealed class StoredEvaluation : IVersioned
 
     /// <summary>Setup → plan locked: the plan is frozen with its SHA-256.</summary>
     /// <exception cref="StageRefusedException">The evaluation is not at setup.</exception>
-    public void LockPlan(DateTimeOffset at, string planHash)
+    /// <param name="at">When.</param>
+    /// <param name="planHash">The locked plan's SHA-256.</param>
+    /// <param name="twoStage">True when the plan's award keeps prices sealed until quality is moderated.</param>
+    public void LockPlan(DateTimeOffset at, string planHash, bool twoStage = false)
     {
         Move(StageRules.LockPlan, EvaluationStage.PlanLocked);
         PlanLockedAt = at;
         PlanHash = planHash;
+        TwoStage = twoStage;
+    }
+
+    /// <summary>
+    /// Two stages: closes quality (no rating or moderated value changes from now on) and opens the prices for the
+    /// bids that remain. Possible during moderation only, once.
+    /// </summary>
+    /// <exception cref="StageRefusedException">Not a two-stage evaluation, not at moderation, or prices already open.</exception>
+    public void OpenPrices(DateTimeOffset at, string by)
+    {
+        if (!TwoStage)
+        {
+            throw new StageRefusedException($"Cannot open prices: evaluation {Reference} is evaluated in one stage; its prices were never sealed.");
+        }
+
+        if (PricesOpenedAt is { } opened)
+        {
+            throw new StageRefusedException($"Cannot open prices: the prices of evaluation {Reference} were opened on {opened:yyyy-MM-dd HH:mm} UTC.");
+        }
+
+        if (!StageRules.OpenPrices.AllowsAt(Stage))
+        {
+            throw new StageRefusedException(StageRules.OpenPrices.Refusal(Reference, Stage));
+        }
+
+        PricesOpenedAt = at;
+        PricesOpenedBy = by;
+    }
+
+    /// <summary>
+    /// An imported two-stage file that already holds prices: the file's quality stage was closed where it was made,
+    /// so the prices count as opened by the import (recorded in the audit trail).
+    /// </summary>
+    public void MarkPricesOpenedByImport(DateTimeOffset at, string importedBy, bool twoStage)
+    {
+        TwoStage = twoStage;
+        PricesOpenedAt = at;
+        PricesOpenedBy = importedBy;
     }
 
     /// <summary>Plan locked → scoring.</summary>

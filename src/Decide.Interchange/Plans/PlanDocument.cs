@@ -1,5 +1,6 @@
 using System.Text.Json;
 using Decide.Core;
+using Decide.Core.Award;
 using Decide.Core.Model;
 using Decide.Core.Scales;
 
@@ -46,6 +47,12 @@ public sealed record PlanDocument
 
     /// <summary>How the criteria are weighted.</summary>
     public WeightingMethod Weighting { get; init; } = WeightingMethod.Importance;
+
+    /// <summary>The published points per group and criterion (<c>publishedWeights</c>), for points weighting.</summary>
+    public PublishedWeights? Points { get; init; }
+
+    /// <summary>The published award method (<c>award</c>), or null for a ranking by closeness alone.</summary>
+    public AwardMethod? Award { get; init; }
 
     /// <summary>The analysis options.</summary>
     public AnalysisOptions Options { get; init; } = new();

@@ -1,4 +1,5 @@
 using System.Text.Json;
+using Decide.Core.Award;
 using Decide.Core.Model;
 
 namespace Decide.Interchange.Plans;
@@ -14,6 +15,8 @@ public static class PlanDocumentReader
     public static PlanDocument Read(JsonElement plan)
     {
         var defaults = new PlanDocument();
+        var criteria = Items(plan, "criteria").Select(Criterion).ToArray();
+        var (points, award) = Award(plan, criteria);
         var options = plan.ValueKind == JsonValueKind.Object && plan.TryGetProperty("options", out var o) && o.ValueKind == JsonValueKind.Object ? o : default;
         return new PlanDocument
         {
@@ -26,8 +29,10 @@ public static class PlanDocumentReader
             ImportanceScale = Scale(plan, "importanceScale", defaults.ImportanceScale),
             PairwiseScale = Scale(plan, "pairwiseScale", defaults.PairwiseScale),
             Groups = Items(plan, "groups").Select(g => new CriterionGroup(Text(g, "id") ?? "", Text(g, "name") ?? "")).ToArray(),
-            Criteria = Items(plan, "criteria").Select(Criterion).ToArray(),
+            Criteria = criteria,
             Weighting = FormatWords.Parse(FormatWords.Weightings, Text(plan, "weighting"), defaults.Weighting),
+            Points = points,
+            Award = award,
             Options = new AnalysisOptions(
                 FormatWords.Parse(FormatWords.Aggregations, Text(options, "aggregation"), defaults.Options.Aggregation),
                 FormatWords.Parse(FormatWords.Ideals, Text(options, "ideal"), defaults.Options.Ideal),
@@ -36,6 +41,29 @@ public static class PlanDocumentReader
                     : defaults.Options.DivergenceTolerance,
                 FormatWords.Parse(FormatWords.AcceptabilityWeightings, Text(options, "acceptabilityWeights"), defaults.Options.AcceptabilityWeights)),
         };
+    }
+
+    /// <summary>
+    /// The published points and the award method, read by the file's own reader with its complaints set aside: a
+    /// value it cannot read is left out, and the strict reader reports it when the plan is checked.
+    /// </summary>
+    private static (PublishedWeights?, AwardMethod?) Award(JsonElement plan, IReadOnlyList<PlanCriterion> criteria)
+    {
+        if (plan.ValueKind != JsonValueKind.Object)
+        {
+            return (null, null);
+        }
+
+        var context = new Reading.ReadContext();
+        var top = context.Fields(plan, Decide.Core.JsonPath.Root, ["publishedWeights", "award"], plan.EnumerateObject().Select(p => p.Name).ToArray());
+        if (top is null)
+        {
+            return (null, null);
+        }
+
+        var reader = new Reading.AwardReader(context);
+        var model = criteria.Select(c => new Criterion(c.Id, c.Name, c.Kind, c.Direction, c.Group)).ToArray();
+        return (reader.Points(top, model), reader.Method(top));
     }
 
     private static PlanCriterion Criterion(JsonElement c)

@@ -67,6 +67,16 @@ public static class PlanDocumentWriter
 
         w.WriteEndArray();
         w.WriteString("weighting", FormatWords.Of(plan.Weighting));
+        if (plan.Points is { } points)
+        {
+            AwardWriter.WritePoints(w, points);
+        }
+
+        if (plan.Award is { } award)
+        {
+            AwardWriter.WriteMethod(w, award);
+        }
+
         EvaluationFileWriter.WriteOptions(w, plan.Options);
         w.WriteEndObject();
     }

@@ -17,7 +17,7 @@ namespace Decide.Interchange.Results;
 /// <param name="UnresolvedTie">True when bids were still tied after every tie-break.</param>
 /// <param name="AwaitingDecision">Bids whose flagged price has no recorded decision yet.</param>
 /// <param name="Winner">The winner under the binding result, or null when there is none yet.</param>
-/// <param name="Agreement">How the points award and the closeness ranking agree.</param>
+/// <param name="Agreement">How the points award and the closeness ranking agree; null while prices are sealed (nothing is ranked).</param>
 public sealed record AwardSection(
     string Binding,
     string PanelScore,
@@ -32,7 +32,7 @@ public sealed record AwardSection(
     bool UnresolvedTie,
     IReadOnlyList<string> AwaitingDecision,
     string? Winner,
-    AwardAgreementEntry Agreement);
+    AwardAgreementEntry? Agreement);
 
 /// <summary>A price formula as the tender states it.</summary>
 /// <param name="Formula">The file's word for it.</param>

@@ -19,6 +19,7 @@ public static class EvaluationEndpoints
         group.MapPost("/{id:guid}/lock-plan", LockPlan).WithSummary("Freeze the plan and the weights (facilitator).");
         group.MapPost("/{id:guid}/open-scoring", OpenScoring).WithSummary("Open scoring (facilitator).");
         group.MapPost("/{id:guid}/start-moderation", StartModeration).WithSummary("Close scoring and start moderation (facilitator).");
+        group.MapPost("/{id:guid}/open-prices", OpenPrices).WithSummary("Two stages: close quality moderation and open the prices (facilitator, moderation).");
         group.MapPost("/{id:guid}/revisions", NewRevision).WithSummary("Open a new revision with a written reason (facilitator).");
         group.MapPut("/{id:guid}/legal-hold", LegalHold).WithSummary("Set or lift a legal hold (administrator).");
         return api;
@@ -56,6 +57,9 @@ public static class EvaluationEndpoints
 
     private static async Task<Ok<TransitionResult>> StartModeration(Guid id, TransitionRequest request, EvaluationLifecycleService service, CancellationToken ct) =>
         TypedResults.Ok(await service.StartModerationAsync(id, request, ct));
+
+    private static async Task<Ok<TransitionResult>> OpenPrices(Guid id, TransitionRequest request, EvaluationLifecycleService service, CancellationToken ct) =>
+        TypedResults.Ok(await service.OpenPricesAsync(id, request, ct));
 
     private static async Task<Created<EvaluationSummary>> NewRevision(Guid id, RevisionRequest request, EvaluationLifecycleService service, CancellationToken ct)
     {

@@ -16,6 +16,8 @@ public static class ExchangeEndpoints
             .WithSummary("Every rating with rationale, declined reason and moderated value, as spreadsheet-safe CSV (facilitator, observer, approver).");
         group.MapGet("/{id:guid}/export/results.csv", ResultsCsv)
             .WithSummary("The ranking (rank, bidder, closeness, d+, d−) as spreadsheet-safe CSV (panel, from moderation on).");
+        group.MapGet("/{id:guid}/export/award.csv", AwardCsv)
+            .WithSummary("The points award per bid and criterion (score, points), price, price points, total, rank, exclusions and flags, as spreadsheet-safe CSV (panel, from moderation on).");
         group.MapPost("/import", Import)
             .WithSummary("Store a decide-evaluation/1 file as a new evaluation at stage Setup, naming the facilitator and each assessor's account (administrator).");
         return api;
@@ -29,6 +31,9 @@ public static class ExchangeEndpoints
 
     private static async Task<FileContentHttpResult> ResultsCsv(Guid id, ExchangeService service, CancellationToken ct) =>
         Download(await service.ResultsCsvAsync(id, ct));
+
+    private static async Task<FileContentHttpResult> AwardCsv(Guid id, ExchangeService service, CancellationToken ct) =>
+        Download(await service.AwardCsvAsync(id, ct));
 
     private static async Task<Created<EvaluationSummary>> Import(ImportRequest request, ExchangeService service, CancellationToken ct)
     {

@@ -7,6 +7,7 @@ using Decide.Web.Features.Inputs;
 using Decide.Web.Features.Exchange;
 using Decide.Web.Features.Moderation;
 using Decide.Web.Features.Records;
+using Decide.Web.Features.Award;
 using Decide.Web.Features.Results;
 using Decide.Web.Features.SignOff;
 using Microsoft.AspNetCore.Http.Json;
@@ -65,6 +66,7 @@ public static class ApiSetup
         services.AddScoped<ScoringBoardService>();
         services.AddScoped<ModerationService>();
         services.AddScoped<ResultsService>();
+        services.AddScoped<AwardService>();
         services.AddScoped<AnalysisService>();
         services.AddScoped<ExchangeService>();
         services.AddScoped<SignOffService>();
@@ -93,6 +95,7 @@ public static class ApiSetup
         api.MapInputEndpoints();
         api.MapModerationEndpoints();
         api.MapResultsEndpoints();
+        api.MapAwardEndpoints();
         api.MapExchangeEndpoints();
         api.MapAnalysisEndpoints();
         api.MapSignOffEndpoints();

@@ -44,6 +44,7 @@ public sealed class AuthorisationMatrixTests(AuthorisationFixture fixture) : ICl
         ["POST /api/evaluations/{id:guid}/lock-plan"] = "1433A333",
         ["POST /api/evaluations/{id:guid}/open-scoring"] = "1433A333",
         ["POST /api/evaluations/{id:guid}/start-moderation"] = "1433A333",
+        ["POST /api/evaluations/{id:guid}/open-prices"] = "1433A333",
         ["POST /api/evaluations/{id:guid}/revisions"] = "1433A333",
         // Administrator-only: refused before the evaluation is looked up, so the same 403 for any id leaks nothing.
         ["PUT /api/evaluations/{id:guid}/legal-hold"] = "1333333A",
@@ -74,10 +75,13 @@ public sealed class AuthorisationMatrixTests(AuthorisationFixture fixture) : ICl
         ["PUT /api/evaluations/{id:guid}/moderation/{bid}/{criterion}"] = "1433A333",
         ["POST /api/evaluations/{id:guid}/sheets/{assessorCode}/reopen"] = "1433A333",
         ["GET /api/evaluations/{id:guid}/results"] = "14AAAAA3",
+        ["GET /api/evaluations/{id:guid}/award"] = "14AAAAA3",
+        ["PUT /api/evaluations/{id:guid}/low-price-reviews/{bid}"] = "1433A333",
 
         ["GET /api/evaluations/{id:guid}/export"] = "1433AAA3",
         ["GET /api/evaluations/{id:guid}/export/ratings.csv"] = "1433AAA3",
         ["GET /api/evaluations/{id:guid}/export/results.csv"] = "14AAAAA3",
+        ["GET /api/evaluations/{id:guid}/export/award.csv"] = "14AAAAA3",
         ["POST /api/evaluations/import"] = "1333333A",
         ["POST /api/analyses"] = "1AAAAAAA",
 

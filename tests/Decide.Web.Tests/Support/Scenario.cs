@@ -28,7 +28,7 @@ public sealed class Scenario(
 
     public HttpClient Observer { get; } = observer;
 
-    /// <summary>"importance" or "pairwise".</summary>
+    /// <summary>"importance", "pairwise" or "points".</summary>
     public string Weighting { get; } = weighting;
 
     /// <summary>The assessors' clients by code.</summary>
@@ -106,8 +106,11 @@ public sealed class Scenario(
             foreach (var client in Assessors.Values)
             {
                 await SignDeclarationAsync(client);
-                await ApiAssert.OkAsync(await client.PutJsonAsync(Url("/my/weights"), CompleteWeights()));
-                await ApiAssert.OkAsync(await client.PostJsonAsync(Url("/my/weights/submit")));
+                if (Weighting != "points")
+                {
+                    await ApiAssert.OkAsync(await client.PutJsonAsync(Url("/my/weights"), CompleteWeights()));
+                    await ApiAssert.OkAsync(await client.PostJsonAsync(Url("/my/weights/submit")));
+                }
             }
 
             await SignDeclarationAsync(Carrow);
@@ -130,7 +133,10 @@ public sealed class Scenario(
         }
     }
 
-    /// <summary>Confirms the names if needed, rates every cell not yet done "G" and submits the sheet.</summary>
+    /// <summary>The term <see cref="CompleteSheetAsync"/> rates with: "G" on Chen's scale, "4" on the points scale.</summary>
+    public string GoodTerm => Weighting == "points" ? "4" : "G";
+
+    /// <summary>Confirms the names if needed, rates every cell not yet done <see cref="GoodTerm"/> and submits the sheet.</summary>
     public async Task CompleteSheetAsync(HttpClient client)
     {
         var declaration = await ApiAssert.OkAsync(await client.GetAsync(Url("/declaration")));
@@ -143,7 +149,7 @@ public sealed class Scenario(
         foreach (var cell in sheet.GetProperty("cells").EnumerateArray().Where(c => !c.GetProperty("done").GetBoolean()))
         {
             var version = cell.GetProperty("version");
-            await ApiAssert.OkAsync(await RateAsync(client, Id, cell.GetProperty("alternative").GetString()!, cell.GetProperty("criterion").GetString()!, "G",
+            await ApiAssert.OkAsync(await RateAsync(client, Id, cell.GetProperty("alternative").GetString()!, cell.GetProperty("criterion").GetString()!, GoodTerm,
                 version.ValueKind == JsonValueKind.Null ? null : version.GetInt64()));
         }
 

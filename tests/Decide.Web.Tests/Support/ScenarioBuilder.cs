@@ -22,6 +22,7 @@ public sealed class ScenarioBuilder(IDecideHost factory)
     public const string Carrow = "carrow";
 
     private string _weighting = "importance";
+    private bool _twoStage;
     private bool _pricesVisible;
     private int _minRationale = 20;
 
@@ -29,6 +30,16 @@ public sealed class ScenarioBuilder(IDecideHost factory)
     public ScenarioBuilder WithPairwiseWeighting()
     {
         _weighting = "pairwise";
+        return this;
+    }
+
+    /// <summary>
+    /// Publishes points and a points award (<see cref="ScenarioPlan.Plan"/>); with <paramref name="twoStage"/> the
+    /// prices stay sealed until quality moderation is closed.
+    /// </summary>
+    public ScenarioBuilder WithPointsAward(bool twoStage)
+    {
+        (_weighting, _twoStage) = ("points", twoStage);
         return this;
     }
 
@@ -78,7 +89,7 @@ public sealed class ScenarioBuilder(IDecideHost factory)
         var f = scenario.Facilitator;
         await ApiAssert.OkAsync(await f.PutJsonAsync(scenario.Url("/plan"), new
         {
-            plan = ScenarioPlan.Plan(reference, _weighting),
+            plan = ScenarioPlan.Plan(reference, _weighting, _twoStage),
             settings = new { minRationaleLength = _minRationale, pricesVisibleToAssessors = _pricesVisible, requiredApprovals = 1 },
             version = await scenario.VersionAsync(),
         }));

@@ -31,7 +31,39 @@ public static class ScenarioPlan
     /// <summary>The rating scale's codes, least favourable first (chen-rating-7).</summary>
     public static readonly string[] RatingTerms = ["VP", "P", "MP", "F", "MG", "G", "VG"];
 
-    public static object Plan(string reference, string weighting) => new Dictionary<string, object?>
+    /// <summary>The codes of the points scale a points award rates on (points-0-5).</summary>
+    public static readonly string[] PointsTerms = ["0", "1", "2", "3", "4", "5"];
+
+    /// <summary>
+    /// The plan. Under <c>"points"</c> weighting it rates on the 0–5 points scale and publishes quality 30, service 30
+    /// (staffing 20, response 10) and price 40 of 100, awarded by the lowest-price ratio with a quality threshold of
+    /// 40 %, a flag on prices more than 20 % below the mean of the others, and (when <paramref name="twoStage"/>)
+    /// prices sealed until quality moderation is closed.
+    /// </summary>
+    public static object Plan(string reference, string weighting, bool twoStage = false)
+    {
+        var points = weighting == "points";
+        var plan = BasePlan(reference, weighting, points ? PointsTerms : RatingTerms);
+        if (!points)
+        {
+            return plan;
+        }
+
+        plan["ratingScale"] = "points-0-5";
+        plan["publishedWeights"] = new { total = 100, groups = new Dictionary<string, double> { [Service] = 30 },
+            criteria = new Dictionary<string, double> { [Quality] = 30, [Staffing] = 20, [Response] = 10, [Price] = 40 } };
+        plan["award"] = new
+        {
+            binding = "points", panelScore = "moderated",
+            price = new { criterion = Price, formula = "lowest-price-ratio" },
+            thresholds = new { qualityShare = 0.4 },
+            abnormallyLow = new { belowMeanOfOthersPercent = 20 },
+            twoStage,
+        };
+        return plan;
+    }
+
+    private static Dictionary<string, object?> BasePlan(string reference, string weighting, string[] codes) => new Dictionary<string, object?>
     {
         ["format"] = "decide-evaluation/1",
         ["title"] = "Cleaning of three bus depots, 2027–2030",
@@ -46,7 +78,7 @@ public static class ScenarioPlan
             {
                 id = Quality, name = "Cleaning method and quality control", kind = "linguistic", direction = "benefit",
                 description = "How the method, materials and checks keep the depots clean and safe.",
-                descriptors = Descriptors("no method statement", "a method that misses the depots' workshops", "a generic method",
+                descriptors = Descriptors(codes, "no method statement", "a method that misses the depots' workshops", "a generic method",
                     "a method covering every area with monthly checks", "a method with weekly checks and photo evidence",
                     "a depot-specific method with independent audits", "as good, with a record of audited results on similar sites"),
             },
@@ -54,7 +86,7 @@ public static class ScenarioPlan
             {
                 id = Staffing, name = "Staffing and supervision", kind = "linguistic", direction = "benefit", group = Service,
                 description = "Staff numbers per shift, supervision and cover for absence.",
-                descriptors = Descriptors("no staffing plan", "staffing below the specification", "staffing without cover for absence",
+                descriptors = Descriptors(codes, "no staffing plan", "staffing below the specification", "staffing without cover for absence",
                     "staffing as specified with cover", "named supervisors and cover", "a supervisor on every shift and trained cover",
                     "as good, with a low staff turnover record"),
             },
@@ -69,6 +101,7 @@ public static class ScenarioPlan
         ["weighting"] = weighting,
     };
 
-    private static Dictionary<string, string> Descriptors(params string[] meanings) =>
-        RatingTerms.Zip(meanings).ToDictionary(x => x.First, x => $"The bid offers {x.Second}.");
+    /// <summary>One descriptor per term of the scale, from the least favourable (the 0–5 scale takes the first six meanings).</summary>
+    private static Dictionary<string, string> Descriptors(string[] codes, params string[] meanings) =>
+        codes.Zip(meanings).ToDictionary(x => x.First, x => $"The bid offers {x.Second}.");
 }

@@ -30,6 +30,15 @@ public sealed record Membership(StoredEvaluation Evaluation, IReadOnlySet<PanelR
             throw DomainProblem.Stage(rule.Refusal(Evaluation.Reference, Evaluation.Stage));
         }
     }
+
+    /// <summary>Refuses once a two-stage evaluation's prices are open: quality (ratings, moderated values, reopened sheets) is then final.</summary>
+    public void RequireQualityOpen()
+    {
+        if (StageRules.QualityClosedRefusal(Evaluation) is { } refusal)
+        {
+            throw DomainProblem.Stage(refusal);
+        }
+    }
 }
 
 /// <summary>Loads an evaluation with the current user's roles, hiding it from anyone who has none.</summary>

@@ -1,4 +1,5 @@
 using System.Text.Json;
+using Decide.Core.Award;
 using Decide.Core.Weighting;
 using Decide.Core.Fuzzy;
 using Decide.Core.Model;
@@ -41,6 +42,7 @@ public sealed class EvaluationComposer
         var values = await db.NumericValues.AsNoTracking().Where(v => v.EvaluationId == id).ToListAsync(ct);
         var gates = await db.GateResults.AsNoTracking().Where(g => g.EvaluationId == id).ToListAsync(ct);
         var moderation = await db.Moderation.AsNoTracking().Where(m => m.EvaluationId == id).OrderBy(m => m.Id).ToListAsync(ct);
+        var reviews = await db.LowPriceReviews.AsNoTracking().Where(r => r.EvaluationId == id).ToListAsync(ct);
 
         int A(string code) => assessorOrder.GetValueOrDefault(code, int.MaxValue);
         int B(string code) => alternativeOrder.GetValueOrDefault(code, int.MaxValue);
@@ -66,6 +68,9 @@ public sealed class EvaluationComposer
                 .OrderBy(m => B(m.AlternativeCode)).ThenBy(m => C(m.CriterionId))
                 .Select(m => new ModeratedRating(m.AlternativeCode, m.CriterionId, m.Term, m.Reason,
                     JsonSerializer.Deserialize<string[]>(m.AgreedByJson) is { Length: > 0 } agreed ? agreed : null)).ToArray(),
+            LowPriceReviews = reviews.OrderBy(r => B(r.AlternativeCode))
+                .Select(r => new LowPriceReview(r.AlternativeCode, r.Asked, r.Answer,
+                    r.Decision is null ? null : FormatWords.Parse(FormatWords.LowPriceDecisions, r.Decision, LowPriceDecision.Accepted), r.Reasons)).ToArray(),
         };
         return plan with { Evaluation = evaluation };
     }

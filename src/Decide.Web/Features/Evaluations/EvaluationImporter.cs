@@ -16,7 +16,7 @@ public static class EvaluationImporter
     {
         Evaluation = file.Evaluation with
         {
-            Alternatives = [], Assessors = [], Importance = [], Pairwise = [], Ratings = [], Values = [], Gates = [], Moderated = [],
+            Alternatives = [], Assessors = [], Importance = [], Pairwise = [], Ratings = [], Values = [], Gates = [], Moderated = [], LowPriceReviews = [],
         },
     });
 
@@ -84,6 +84,22 @@ public static class EvaluationImporter
             EvaluationId = stored.Id, AlternativeCode = m.Alternative, CriterionId = m.Criterion, Term = m.Term, Reason = m.Reason,
             AgreedByJson = JsonSerializer.Serialize(m.AgreedBy ?? []), RecordedBy = createdBy, RecordedAt = now,
         }));
+        db.LowPriceReviews.AddRange(e.LowPriceReviews.Select(r => new LowPriceReviewEntry
+        {
+            EvaluationId = stored.Id, AlternativeCode = r.Alternative, Asked = r.Asked, AskedBy = createdBy, AskedAt = now,
+            Answer = r.Answer, AnsweredAt = r.Answer is null ? null : now,
+            Decision = r.Decision is { } d ? FormatWords.Of(d) : null, Reasons = r.Reasons,
+            DecidedBy = r.Decision is null ? null : createdBy, DecidedAt = r.Decision is null ? null : now, Version = 1,
+        }));
+        if (e.Award is { TwoStage: true } award && e.Values.Any(v => v.Criterion == award.PriceCriterion))
+        {
+            stored.MarkPricesOpenedByImport(now, createdBy, twoStage: true);
+        }
+
         return stored;
     }
+
+    /// <summary>True when importing <paramref name="file"/> counts as opening its sealed prices (a two-stage plan whose file holds prices).</summary>
+    public static bool OpensPrices(EvaluationFile file) =>
+        file.Evaluation.Award is { TwoStage: true } award && file.Evaluation.Values.Any(v => v.Criterion == award.PriceCriterion);
 }

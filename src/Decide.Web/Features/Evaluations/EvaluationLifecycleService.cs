@@ -21,6 +21,8 @@ public sealed class EvaluationLifecycleService(
     CurrentUser user,
     AuditWriter audit,
     PlanLockCheck lockCheck,
+    EvaluationComposer composer,
+    Moderation.ModerationService moderation,
     TimeProvider clock)
 {
     /// <summary>
@@ -41,7 +43,7 @@ public sealed class EvaluationLifecycleService(
                 throw new InvalidEvaluationException(check.Errors);
             }
 
-            m.Evaluation.LockPlan(clock.GetUtcNow(), Sha256(m.Evaluation.PlanJson));
+            m.Evaluation.LockPlan(clock.GetUtcNow(), Sha256(m.Evaluation.PlanJson), EvaluationComposer.ReadPlan(m.Evaluation).Evaluation.Award?.TwoStage == true);
             return check.Consistency;
         }, ct);
 
@@ -70,6 +72,46 @@ public sealed class EvaluationLifecycleService(
 
             m.Evaluation.StartModeration(clock.GetUtcNow());
             return Task.FromResult<IReadOnlyList<string>>([]);
+        }, ct);
+
+    /// <summary>
+    /// Two stages: closes quality moderation and opens the prices (facilitator, moderation stage). Refused while a
+    /// rating sheet is open or a flagged cell has no moderated value; from then on ratings and moderated values are
+    /// final and the price evaluator enters the prices of the bids that passed every threshold. Audited.
+    /// </summary>
+    public Task<TransitionResult> OpenPricesAsync(Guid id, TransitionRequest request, CancellationToken ct = default) =>
+        Transition(id, request, StageRules.OpenPrices, "prices.opened", async (db, m) =>
+        {
+            var e = m.Evaluation;
+            if (!e.TwoStage)
+            {
+                throw DomainProblem.Stage($"Cannot open prices: evaluation {e.Reference} is evaluated in one stage; its prices were never sealed.");
+            }
+
+            if (e.PricesOpenedAt is { } opened)
+            {
+                throw DomainProblem.Stage($"Cannot open prices: they were opened on {opened:yyyy-MM-dd HH:mm} UTC.");
+            }
+
+            var open = e.Panel.Where(p => p.Role == PanelRole.Assessor && p.SubmittedAt is null).Select(p => p.AssessorCode).ToArray();
+            if (open.Length > 0)
+            {
+                throw DomainProblem.Stage($"Cannot open prices: quality scoring is not closed; the rating sheet of {string.Join(", ", open)} is open.");
+            }
+
+            var undiscussed = await moderation.UndiscussedAsync(db, m, ct);
+            if (undiscussed.Count > 0)
+            {
+                throw DomainProblem.Stage($"Cannot open prices: quality moderation is still open; the panel has not agreed a value for {undiscussed.Count} cell{(undiscussed.Count == 1 ? "" : "s")} it must discuss ({string.Join("; ", undiscussed.Take(5).Select(c => $"{c.AlternativeName}, {c.CriterionName}"))}{(undiscussed.Count > 5 ? "; …" : "")}).");
+            }
+
+            var file = await composer.ComposeAsync(db, e, ct);
+            var quality = Decide.Core.Award.AwardAnalysis.QualityStage(file.Evaluation);
+            e.OpenPrices(clock.GetUtcNow(), user.Id);
+            db.MarkChanged(e);
+            return quality.Result.Bids.Where(b => b.Excluded is not null)
+                .Select(b => $"{b.Id} takes no part in price ({Decide.Core.Award.AwardText.Exclusion(b.Excluded!.Value)}: {b.ExclusionDetail}); its price is not opened.")
+                .ToArray();
         }, ct);
 
     /// <summary>

@@ -17,7 +17,7 @@ public sealed class PlanLockCheck(EvaluationComposer composer)
     /// <summary>Plan members of the portable file; everything else belongs to the panel, bids or inputs.</summary>
     private static readonly string[] PlanPaths =
         ["$.format", "$.title", "$.reference", "$.organisation", "$.description", "$.noun", "$.ratingScale",
-         "$.importanceScale", "$.pairwiseScale", "$.groups", "$.criteria", "$.weighting", "$.options"];
+         "$.importanceScale", "$.pairwiseScale", "$.groups", "$.criteria", "$.weighting", "$.publishedWeights", "$.award", "$.options"];
 
     /// <summary>The checks <see cref="EvaluationLifecycleService.LockPlanAsync"/> makes, as sentences, plus what the facilitator should know before locking.</summary>
     public async Task<LockReadiness> ReadinessAsync(DecideDbContext db, StoredEvaluation e, CancellationToken ct)
@@ -55,6 +55,7 @@ public sealed class PlanLockCheck(EvaluationComposer composer)
         }
 
         // Only submitted weights are frozen: an assessor still working on theirs must finish or withdraw them.
+        var published = file.Evaluation.Weighting == Core.Model.WeightingMethod.Points;
         var judges = file.Evaluation.Importance.Select(r => r.Assessor).Concat(file.Evaluation.Pairwise.Select(p => p.Assessor)).ToHashSet(StringComparer.Ordinal);
         foreach (var seat in assessors)
         {
@@ -62,7 +63,7 @@ public sealed class PlanLockCheck(EvaluationComposer composer)
             {
                 blocking.Add($"Assessor {seat.AssessorCode} has weight judgements that are not submitted yet: they submit them, or clear them, before the plan is locked.");
             }
-            else if (!judges.Contains(seat.AssessorCode!))
+            else if (!judges.Contains(seat.AssessorCode!) && !published)
             {
                 var others = judges.Count > 0 ? "; the panel's weights will come from the others" : "";
                 warnings.Add(seat.DeclarationSignedAt is null

@@ -4,6 +4,7 @@ using System.Text;
 using System.Text.Json;
 using System.Text.RegularExpressions;
 using Decide.Core;
+using Decide.Core.Award;
 using Decide.Core.Analysis;
 using Decide.Data;
 using Decide.Data.Entities;
@@ -68,6 +69,7 @@ public sealed partial class ExchangeService(
         {
             var m = await access.LoadAsync(db, id, ct);
             ResultsService.RequireResultsVisible(m, "export the results");
+            ResultsService.RequirePricesOpen(m, "export the ranking");
             var e = (await composer.ComposeAsync(db, m.Evaluation, ct)).Evaluation;
             var result = DecisionRun.Of(e).Analysis;
             var names = e.Alternatives.ToDictionary(a => a.Id, a => a.Name, StringComparer.Ordinal);
@@ -81,10 +83,63 @@ public sealed partial class ExchangeService(
             foreach (var x in result.Excluded)
             {
                 csv.Row("", SpreadsheetCsv.Text(x.Alternative), SpreadsheetCsv.Text(names.GetValueOrDefault(x.Alternative)), "", "", "",
-                    SpreadsheetCsv.Text(string.Join(" ", x.Gates)));
+                    SpreadsheetCsv.Text(x.Gates.Count > 0 ? string.Join(" ", x.Gates) : x.Reason));
             }
 
             return await Download(db, m.Evaluation, "results.exported", "export/results.csv", FileName(m.Evaluation, "-results.csv"), CsvType, csv.ToUtf8(), ct);
+        }, ct);
+
+    /// <summary>
+    /// The points award as a spreadsheet a bidder's figures can be checked against: one row per bid with, per
+    /// quality criterion, the panel's score and the quality points, then quality, price, price points (or the
+    /// figure), total, rank and any exclusion or flag. While prices are sealed, the quality stage alone.
+    /// </summary>
+    public Task<DownloadFile> AwardCsvAsync(Guid id, CancellationToken ct = default) =>
+        UnitOfWork.RunAsync(factory, async db =>
+        {
+            var m = await access.LoadAsync(db, id, ct);
+            ResultsService.RequireResultsVisible(m, "export the award");
+            var e = (await composer.ComposeAsync(db, m.Evaluation, ct)).Evaluation;
+            if (e.Award is null)
+            {
+                throw DomainProblem.Stage($"Evaluation {m.Evaluation.Reference} publishes no points award: its plan ranks the bids by closeness alone.");
+            }
+
+            var (award, _) = Award.AwardService.AwardOf(m.Evaluation, e);
+            var names = e.Alternatives.ToDictionary(a => a.Id, a => a.Name, StringComparer.Ordinal);
+            var header = new List<string> { "rank", "bidder", "name" };
+            foreach (var c in award.QualityCriteria)
+            {
+                header.Add($"{c}_score");
+                header.Add($"{c}_points");
+            }
+
+            header.AddRange(["quality_points", "quality_share", "price", award.Formula.GivesPoints ? "price_points" : "figure", "total", "excluded", "abnormally_low", "low_price_decision"]);
+            var csv = new SpreadsheetCsv().Header([.. header]);
+            foreach (var line in award.Lines)
+            {
+                var b = line.Award;
+                var row = new List<string> { b.Rank is { } rank ? SpreadsheetCsv.Number(rank) : "", SpreadsheetCsv.Text(b.Id), SpreadsheetCsv.Text(names.GetValueOrDefault(b.Id)) };
+                for (var j = 0; j < line.Cells.Count; j++)
+                {
+                    row.Add(SpreadsheetCsv.Number(line.Cells[j].Score));
+                    row.Add(SpreadsheetCsv.Number(b.CriterionPoints[j]));
+                }
+
+                var priceScore = award.Formula.GivesPoints ? b.PricePoints : b.Figure;
+                row.AddRange([
+                    SpreadsheetCsv.Number(b.QualityPoints), SpreadsheetCsv.Number(b.QualityShare),
+                    b.Price is { } price ? SpreadsheetCsv.Number(price) : "",
+                    priceScore is { } score ? SpreadsheetCsv.Number(score) : "",
+                    b.Total is { } total ? SpreadsheetCsv.Number(total) : "",
+                    SpreadsheetCsv.Text(b.Excluded is { } why ? $"{AwardText.Exclusion(why)}: {b.ExclusionDetail}" : null),
+                    SpreadsheetCsv.Text(b.AbnormallyLowFlag),
+                    SpreadsheetCsv.Text(line.Review?.Decision is { } d ? FormatWords.Of(d) : null),
+                ]);
+                csv.Row([.. row]);
+            }
+
+            return await Download(db, m.Evaluation, "award.exported", "export/award.csv", FileName(m.Evaluation, "-award.csv"), CsvType, csv.ToUtf8(), ct);
         }, ct);
 
     /// <summary>
@@ -178,6 +233,12 @@ public sealed partial class ExchangeService(
             var stored = EvaluationImporter.Add(db, file, accounts, facilitator!.Id, user.Id, clock.GetUtcNow());
             audit.Record(db, stored.Id, new AuditEvent("evaluation.imported", $"evaluations/{stored.Id}", null,
                 $"{stored.Reference} · {stored.Title}; facilitator {facilitator.Email}; assessors {string.Join(", ", given.Select(x => $"{x.Key}={x.Value.Trim()}"))}; file sha256 {Sha256(raw)}"));
+            if (EvaluationImporter.OpensPrices(file))
+            {
+                audit.Record(db, stored.Id, new AuditEvent("prices.opened", $"evaluations/{stored.Id}", null,
+                    "the imported file of a two-stage evaluation holds its prices, so quality counts as closed and the prices as opened by the import"));
+            }
+
             await db.SaveChangesAsync(ct);
             return EvaluationStore.Summarise(stored, [.. stored.Panel.Where(p => p.UserId == user.Id).Select(p => p.Role)]);
         }, ct);

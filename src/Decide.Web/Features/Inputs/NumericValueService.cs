@@ -5,6 +5,7 @@ using Decide.Data;
 using Decide.Data.Entities;
 using Decide.Interchange;
 using Decide.Web.Features.Audit;
+using Decide.Web.Features.Evaluations;
 using Decide.Web.Infrastructure;
 using Microsoft.EntityFrameworkCore;
 
@@ -19,6 +20,7 @@ public sealed class NumericValueService(
     InputAccess access,
     CurrentUser user,
     AuditWriter audit,
+    EvaluationComposer composer,
     TimeProvider clock)
 {
     public async Task<ValuesView> GetAsync(Guid id, CancellationToken ct = default)
@@ -36,7 +38,11 @@ public sealed class NumericValueService(
             var x = await access.LoadAsync(db, id, ct);
             x.Membership.Require(PanelRole.PriceEvaluator);
             x.RequireDeclaration();
-            x.Membership.RequireStage(StageRules.EnterValues);
+            if (StageRules.ValuesRefusal(x.Evaluation) is { } refusal)
+            {
+                throw DomainProblem.Stage(refusal);
+            }
+
             x.RequireNamesConfirmed();
             var plan = x.Plan.Evaluation;
             var bidder = InputStore.Bidder(await InputStore.BiddersAsync(db, id, ct), alternative);
@@ -46,6 +52,15 @@ public sealed class NumericValueService(
                 throw DomainProblem.Invalid("criterion", c.Kind == CriterionKind.Linguistic
                     ? $"criterion \"{c.Id}\" is linguistic; assessors rate it, it takes no value"
                     : $"criterion \"{c.Id}\" is a pass/fail gate; the facilitator records its result, it takes no value");
+            }
+
+            if (x.Evaluation.TwoStage && plan.Award is { } award && award.PriceCriterion == c.Id)
+            {
+                var quality = Decide.Core.Award.AwardAnalysis.QualityStage((await composer.ComposeAsync(db, x.Evaluation, ct)).Evaluation);
+                if (quality.Result.Bids.FirstOrDefault(b => b.Id == bidder.Code) is { Excluded: { } why } excluded)
+                {
+                    throw DomainProblem.Stage($"\"{bidder.Code}\" takes no part in price ({Decide.Core.Award.AwardText.Exclusion(why)}: {excluded.ExclusionDetail}), so its price stays sealed.");
+                }
             }
 
             if (await db.Conflicts.AnyAsync(k => k.EvaluationId == id && k.UserId == user.Id && k.AlternativeCode == bidder.Code, ct))
@@ -123,7 +138,7 @@ public sealed class NumericValueService(
             criteria.Select(c => new NumericCriterionView(c.Id, c.Name, c.Unit, FormatWords.Of(c.Direction))).ToArray(),
             bidders.Select(b => new BidderView(b.Code, b.Name)).ToArray(),
             cells,
-            x.Membership.Has(PanelRole.PriceEvaluator) && StageRules.EnterValues.AllowsAt(x.Evaluation.Stage));
+            x.Membership.Has(PanelRole.PriceEvaluator) && StageRules.ValuesRefusal(x.Evaluation) is null);
     }
 
     private static ValueCell Cell(NumericEntry r, IReadOnlyDictionary<string, string> names) =>

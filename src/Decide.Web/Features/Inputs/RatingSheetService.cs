@@ -135,6 +135,11 @@ public sealed class RatingSheetService(
 
     private static void RequireEditable(InputContext x, PanelMember seat)
     {
+        if (StageRules.QualityClosedRefusal(x.Evaluation) is { } closed)
+        {
+            throw DomainProblem.Stage(closed);
+        }
+
         if (Editable(x, seat))
         {
             return;
@@ -147,7 +152,7 @@ public sealed class RatingSheetService(
 
     /// <summary>Scoring and not submitted, or Scoring/Moderation on a sheet the facilitator reopened (submission cleared).</summary>
     private static bool Editable(InputContext x, PanelMember seat) =>
-        seat.SubmittedAt is null && StageRules.Rate.AllowsAt(x.Evaluation.Stage);
+        seat.SubmittedAt is null && StageRules.Rate.AllowsAt(x.Evaluation.Stage) && !x.Evaluation.QualityClosed;
 
     private static void Validate(Evaluation plan, Criterion c, RatingRequest r, int minimum)
     {

@@ -26,7 +26,12 @@ public static class WeightsFeedbackBuilder
         WeightStructure.PairwiseValue(plan, j.Term, j.Lower, j.Middle, j.Upper);
 
     public static WeightsFeedback Build(Evaluation plan, string assessor, IReadOnlyList<WeightJudgement> judgements) =>
-        plan.Weighting == WeightingMethod.Importance ? Importance(plan, judgements) : Pairwise(plan, assessor, judgements);
+        plan.Weighting switch
+        {
+            WeightingMethod.Importance => Importance(plan, judgements),
+            WeightingMethod.Points => new WeightsFeedback(true, [], [], []),
+            _ => Pairwise(plan, assessor, judgements),
+        };
 
     private static WeightsFeedback Importance(Evaluation plan, IReadOnlyList<WeightJudgement> judgements)
     {

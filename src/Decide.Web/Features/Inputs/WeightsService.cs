@@ -41,6 +41,7 @@ public sealed class WeightsService(
             var seat = x.RequireAssessor();
             x.RequireDeclaration();
             x.Membership.RequireStage(StageRules.ChangeWeights);
+            RequireJudgedWeights(x);
             var existing = await JudgementsAsync(db, x, seat, tracked: true, ct);
             if (request.Version is { } version && version != seat.Version)
             {
@@ -90,6 +91,7 @@ public sealed class WeightsService(
             var seat = x.RequireAssessor();
             x.RequireDeclaration();
             x.Membership.RequireStage(StageRules.SubmitWeights);
+            RequireJudgedWeights(x);
             if (seat.WeightsSubmittedAt is { } at)
             {
                 throw new DomainProblem(StatusCodes.Status409Conflict, "Already submitted",
@@ -121,6 +123,15 @@ public sealed class WeightsService(
             return new WeightsSubmitted(View(x, seat, judgements), feedback.Warnings);
         }, ct);
 
+    /// <summary>Under published points the weights are fixed in the plan: nobody judges them.</summary>
+    private static void RequireJudgedWeights(InputContext x)
+    {
+        if (x.Plan.Evaluation.Weighting == WeightingMethod.Points)
+        {
+            throw DomainProblem.Stage($"The weights of evaluation {x.Evaluation.Reference} are the points published in the plan; assessors give no weight judgements.");
+        }
+    }
+
     private static async Task<List<WeightJudgement>> JudgementsAsync(DecideDbContext db, InputContext x, PanelMember seat, bool tracked, CancellationToken ct)
     {
         var query = db.WeightJudgements.Where(w => w.EvaluationId == x.Id && w.AssessorCode == seat.AssessorCode);
@@ -133,7 +144,7 @@ public sealed class WeightsService(
         var scale = plan.Weighting == WeightingMethod.Importance ? plan.ImportanceScale : plan.PairwiseScale;
         return new WeightsView(
             seat.AssessorCode!,
-            plan.Weighting == WeightingMethod.Importance ? ImportanceKind : PairwiseKind,
+            plan.Weighting switch { WeightingMethod.Importance => ImportanceKind, WeightingMethod.Points => "points", _ => PairwiseKind },
             WeightsFeedbackBuilder.Nodes(plan),
             Terms(scale),
             judgements.Where(j => j.Kind == ImportanceKind).ToDictionary(j => j.Node, j => j.Term ?? "", StringComparer.Ordinal),
@@ -141,7 +152,7 @@ public sealed class WeightsService(
                 .Select(j => new PairwiseEntry(j.Node, j.Column, j.Term, j.Term is null ? [j.Lower ?? 1, j.Middle ?? 1, j.Upper ?? 1] : null)).ToArray(),
             WeightsFeedbackBuilder.Build(plan, seat.AssessorCode!, judgements),
             seat.WeightsSubmittedAt,
-            StageRules.ChangeWeights.AllowsAt(x.Evaluation.Stage),
+            StageRules.ChangeWeights.AllowsAt(x.Evaluation.Stage) && plan.Weighting != WeightingMethod.Points,
             seat.Version);
     }
 

@@ -39,7 +39,19 @@ public sealed class ModerationService(
         var m = await access.LoadAsync(db, id, ct);
         m.Require(PanelRole.Facilitator, PanelRole.Observer, PanelRole.Approver, PanelRole.Assessor);
         RequireModerationReached(m, "compare the panel's ratings");
+        return await BoardAsync(db, m, ct);
+    }
 
+    /// <summary>
+    /// The cells the panel still has to discuss: flagged for divergence and without a moderated value. While any is
+    /// left, quality moderation is open (a two-stage evaluation cannot open its prices).
+    /// </summary>
+    internal async Task<IReadOnlyList<ModerationCell>> UndiscussedAsync(DecideDbContext db, Membership m, CancellationToken ct) =>
+        (await BoardAsync(db, m, ct)).Cells.Where(c => c.Flagged && c.InForce is null).ToArray();
+
+    private async Task<ModerationBoard> BoardAsync(DecideDbContext db, Membership m, CancellationToken ct)
+    {
+        var id = m.Evaluation.Id;
         var plan = EvaluationComposer.ReadPlan(m.Evaluation).Evaluation;
         var scale = plan.RatingScale;
         var alternatives = await db.Alternatives.AsNoTracking().Where(a => a.EvaluationId == id)
@@ -112,6 +124,7 @@ public sealed class ModerationService(
             var m = await access.LoadAsync(db, id, ct);
             m.Require(PanelRole.Facilitator);
             m.RequireStage(StageRules.Moderate);
+            m.RequireQualityOpen();
 
             var plan = EvaluationComposer.ReadPlan(m.Evaluation).Evaluation;
             var target = plan.Criteria.FirstOrDefault(c => c.Id == criterion) ?? throw DomainProblem.NotFound($"Criterion \"{criterion}\"");
@@ -224,6 +237,7 @@ public sealed class ModerationService(
             var m = await access.LoadAsync(db, id, ct);
             m.Require(PanelRole.Facilitator);
             m.RequireStage(StageRules.ReopenSheet);
+            m.RequireQualityOpen();
             var reason = request.Reason?.Trim() ?? "";
             if (reason.Length is < MinReasonLength or > MaxReasonLength)
             {

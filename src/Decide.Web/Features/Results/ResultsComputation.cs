@@ -13,12 +13,11 @@ public sealed record ResultsJson(string Json, string Sha256);
 /// <summary>Runs the engine on a portable evaluation: the analysis, then robustness, as one results document.</summary>
 public static class ResultsComputation
 {
-    /// <summary>The full results document (<c>decide-results/1</c>) with sensitivity, agreement and summary.</summary>
+    /// <summary>The full results document (<c>decide-results/1</c>) with sensitivity, agreement and summary, and the points award when the plan publishes one.</summary>
     /// <exception cref="Decide.Core.InvalidEvaluationException">The evaluation cannot be analysed; every problem by JSON path.</exception>
     public static ResultsJson Run(EvaluationFile file, RobustnessOptions options)
     {
-        var (_, result, robustness) = DecisionRun.Of(file.Evaluation, options);
-        var json = ResultsWriter.ToJson(result, file.Evaluation, robustness);
+        var json = ResultsWriter.ToJson(ResultsWriter.CreateDocument(DecisionRun.Of(file.Evaluation, options), file.Evaluation));
         return new ResultsJson(json, Convert.ToHexStringLower(SHA256.HashData(Encoding.UTF8.GetBytes(json))));
     }
 }

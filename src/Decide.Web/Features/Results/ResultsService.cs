@@ -57,11 +57,21 @@ public sealed class ResultsService(
         Moderation.ModerationService.RequireModerationReached(m, action);
     }
 
+    /// <summary>The ranking needs every price: refused while a two-stage evaluation's prices are sealed.</summary>
+    internal static void RequirePricesOpen(Membership m, string action)
+    {
+        if (m.Evaluation.PricesSealed)
+        {
+            throw DomainProblem.Stage($"Cannot {action} yet: evaluation {m.Evaluation.Reference} is evaluated in two stages and its prices stay sealed until quality moderation is closed and they are opened. The quality stage of the award (quality points and thresholds) is shown on its own until then.");
+        }
+    }
+
     private async Task<(EvaluationSummary Summary, Interchange.EvaluationFile File)> ComposeAsync(Guid id, CancellationToken ct)
     {
         await using var db = await factory.CreateDbContextAsync(ct);
         var m = await access.LoadAsync(db, id, ct);
         RequireResultsVisible(m, "see the results");
+        RequirePricesOpen(m, "rank the bids");
         return (EvaluationStore.Summarise(m.Evaluation, m.Roles), await composer.ComposeAsync(db, m.Evaluation, ct));
     }
 

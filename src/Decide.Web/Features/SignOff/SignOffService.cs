@@ -1,5 +1,6 @@
 using System.Security.Cryptography;
 using System.Text;
+using Decide.Core;
 using Decide.Core.Analysis;
 using Decide.Data;
 using Decide.Data.Entities;
@@ -80,8 +81,18 @@ public sealed class SignOffService(
                 throw DomainProblem.Stage($"Cannot ask for sign-off: the rating sheet of {string.Join(", ", open)} is not submitted.");
             }
 
+            if (e.PricesSealed)
+            {
+                throw DomainProblem.Stage("Cannot ask for sign-off: the prices are still sealed; close quality moderation and open them first.");
+            }
+
             var file = await composer.ComposeAsync(db, e, ct);
-            DecisionEngine.Prepare(file.Evaluation);
+            var run = DecisionRun.Of(file.Evaluation);
+            if (run.Award is { AwaitingDecision.Count: > 0 } award)
+            {
+                throw DomainProblem.Stage($"Cannot ask for sign-off: the price of {string.Join(", ", award.AwaitingDecision)} is flagged as abnormally low and the decision on its explanation is not recorded yet.");
+            }
+
             var hash = Fingerprint(file);
             e.SignOffRequestedAt = clock.GetUtcNow();
             e.SignOffRequestedBy = user.Id;

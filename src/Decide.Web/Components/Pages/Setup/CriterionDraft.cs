@@ -24,6 +24,12 @@ public sealed class CriterionDraft
     /// <summary>What each rating term means for this criterion, by term code (kept when the scale changes; only the scale's terms are saved).</summary>
     public Dictionary<string, string> Descriptors { get; } = new(StringComparer.Ordinal);
 
+    /// <summary>Its published points (points weighting), or null when not given yet.</summary>
+    public double? Points { get; set; }
+
+    /// <summary>The least term the panel's score must reach under the published award, or null for none.</summary>
+    public string? MinimumTerm { get; set; }
+
     /// <summary>True once the criterion was read from the stored plan: its id is then kept (weights and assignments refer to it).</summary>
     public bool Stored { get; set; }
 }

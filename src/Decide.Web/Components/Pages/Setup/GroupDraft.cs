@@ -7,6 +7,9 @@ public sealed class GroupDraft
 
     public string Name { get; set; } = "";
 
+    /// <summary>Its published points (points weighting): the sum of its criteria's.</summary>
+    public double? Points { get; set; }
+
     /// <summary>True once the group was read from the stored plan: its id is then kept (weights refer to it).</summary>
     public bool Stored { get; set; }
 }

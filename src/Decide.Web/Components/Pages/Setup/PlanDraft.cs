@@ -1,5 +1,6 @@
 using System.Text;
 using System.Text.Json;
+using Decide.Core.Award;
 using Decide.Core.Model;
 using Decide.Core.Scales;
 using Decide.Interchange.Plans;
@@ -15,7 +16,7 @@ namespace Decide.Web.Components.Pages.Setup;
 public sealed class PlanDraft
 {
     /// <summary>Rating scales to choose from (built in).</summary>
-    public static readonly IReadOnlyList<string> RatingScales = ["chen-rating-7", "rating-5"];
+    public static readonly IReadOnlyList<string> RatingScales = ["chen-rating-7", "rating-5", "points-0-5", "points-0-10"];
 
     /// <summary>Importance scales to choose from (built in).</summary>
     public static readonly IReadOnlyList<string> ImportanceScales = ["chen-importance-7", "importance-5"];
@@ -46,6 +47,12 @@ public sealed class PlanDraft
     public List<CriterionDraft> Criteria { get; } = [];
 
     public WeightingMethod Weighting { get; set; } = WeightingMethod.Importance;
+
+    /// <summary>What the published points add up to (points weighting); 100 for percentages.</summary>
+    public double PointsTotal { get; set; } = 100;
+
+    /// <summary>The published award method.</summary>
+    public AwardDraft Award { get; set; } = new();
 
     public AggregationRule Aggregation { get; set; } = AggregationRule.Mean;
 
@@ -83,6 +90,8 @@ public sealed class PlanDraft
             ImportanceScale = read.ImportanceScale,
             PairwiseScale = read.PairwiseScale,
             Weighting = read.Weighting,
+            PointsTotal = read.Points?.Total ?? 100,
+            Award = AwardDraft.From(read.Award),
             Aggregation = read.Options.Aggregation,
             Ideal = read.Options.Ideal,
             DivergenceTolerance = read.Options.DivergenceTolerance,
@@ -91,13 +100,17 @@ public sealed class PlanDraft
             PricesVisibleToAssessors = settings.PricesVisibleToAssessors,
             RequiredApprovals = settings.RequiredApprovals,
         };
-        d.Groups.AddRange(read.Groups.Select(g => new GroupDraft { Id = g.Id, Name = g.Name, Stored = true }));
+        d.Groups.AddRange(read.Groups.Select(g => new GroupDraft
+        {
+            Id = g.Id, Name = g.Name, Stored = true, Points = read.Points?.Groups.TryGetValue(g.Id, out var points) == true ? points : null,
+        }));
         foreach (var c in read.Criteria)
         {
             var criterion = new CriterionDraft
             {
                 Id = c.Id, Name = c.Name, Kind = c.Kind, Direction = c.Direction, Group = c.Group, Unit = c.Unit,
                 Description = c.Description, Stored = true,
+                Points = read.Points?.PointsOf(c.Id), MinimumTerm = read.Award?.MinimumTerms?.GetValueOrDefault(c.Id),
             };
             foreach (var (code, text) in c.Descriptors ?? new Dictionary<string, string>())
             {
@@ -125,8 +138,19 @@ public sealed class PlanDraft
         Criteria = Criteria.Select(c => new PlanCriterion(c.Id, c.Name, c.Kind, c.Direction, c.Group, c.Unit, c.Description,
             new Dictionary<string, string>(c.Descriptors, StringComparer.Ordinal))).ToArray(),
         Weighting = Weighting,
+        Points = Weighting == WeightingMethod.Points ? PublishedPoints() : null,
+        Award = Weighting == WeightingMethod.Points
+            ? Award.ToMethod(Criteria.Where(c => c.Kind == CriterionKind.Linguistic && !string.IsNullOrWhiteSpace(c.MinimumTerm))
+                .ToDictionary(c => c.Id, c => c.MinimumTerm!, StringComparer.Ordinal))
+            : null,
         Options = new AnalysisOptions(Aggregation, Ideal, DivergenceTolerance, AcceptabilityWeights),
     };
+
+    /// <summary>The published points as the plan states them: every group and scored criterion that has points.</summary>
+    private PublishedWeights PublishedPoints() => new(
+        PointsTotal,
+        Groups.Where(g => g.Points is not null).ToDictionary(g => g.Id, g => g.Points!.Value, StringComparer.Ordinal),
+        Criteria.Where(c => c.Kind != CriterionKind.Gate && c.Points is not null).Select(c => new PublishedCriterion(c.Id, c.Points!.Value, c.Group)).ToArray());
 
     /// <summary>Adds a criterion (at the end) and returns it.</summary>
     public CriterionDraft AddCriterion()
