@@ -124,6 +124,32 @@ public sealed class AwardAnalysisTests
     }
 
     [Fact]
+    public void A_bid_excluded_before_price_needs_no_price_but_a_bid_still_in_the_running_does()
+    {
+        var method = new AwardMethod("price", PriceFormula.LowestPriceRatio, MinimumQualityShare: 0.5, TwoStage: true);
+        var unopened = Tender(method) with { Values = Tender().Values.Where(v => v.Alternative != "c").ToArray() };
+        Assert.Empty(EvaluationValidator.Validate(unopened));
+        Assert.Equal(AwardExclusion.BelowQualityThreshold, DecisionRun.Of(unopened).Award!.Result.Bids.Single(b => b.Id == "c").Excluded);
+
+        var missing = Tender(method) with { Values = Tender().Values.Where(v => v.Alternative != "a").ToArray() };
+        Assert.Contains(EvaluationValidator.Validate(missing), e => e.Path == "$.values.a.price");
+    }
+
+    [Fact]
+    public void The_quality_stage_is_computed_while_every_price_is_sealed()
+    {
+        var method = new AwardMethod("price", PriceFormula.LowestPriceRatio, MinimumQualityShare: 0.5, TwoStage: true);
+        var sealedPrices = Tender(method) with { Values = [] };
+        Assert.Throws<InvalidEvaluationException>(() => DecisionRun.Of(sealedPrices));
+
+        var quality = AwardAnalysis.QualityStage(sealedPrices);
+        Assert.True(quality.Result.PricesSealed);
+        Assert.Equal(AwardExclusion.BelowQualityThreshold, quality.Result.Bids.Single(b => b.Id == "c").Excluded);
+        Assert.Equal(56, quality.Result.Bids.Single(b => b.Id == "b").QualityPoints, 9);
+        Assert.Null(quality.Winner);
+    }
+
+    [Fact]
     public void A_criterion_minimum_given_as_a_term_excludes_a_bid_whose_score_is_below_that_terms_points()
     {
         var award = DecisionRun.Of(Tender(new AwardMethod("price", PriceFormula.LowestPriceRatio,
