@@ -11,7 +11,7 @@ namespace Decide.Cli;
 /// </summary>
 internal static class AwardRenderer
 {
-    public static void Render(EvaluationFile file, AwardReport award, AwardAgreement agreement, TextWriter output)
+    public static void Render(EvaluationFile file, AwardReport award, AwardAgreement agreement, AwardRobustnessResult? robustness, TextWriter output)
     {
         var e = file.Evaluation;
         var names = e.Alternatives.GroupBy(a => a.Id).ToDictionary(g => g.Key, g => g.First().Name);
@@ -90,7 +90,46 @@ internal static class AwardRenderer
             ? "  Closeness ranking: no first place to compare yet."
             : $"  Closeness ranking: {(agreement.SameWinner ? "the same first place" : $"a different first place ({agreement.ClosenessWinner})")}; Kendall τ-b between the two orders {(agreement.KendallTau is { } tau ? F2(tau) : "not defined")} over {agreement.Compared} bids.");
         output.WriteLine($"  Winner under the binding result: {(agreement.Winner is { } winner ? $"{winner} {names.GetValueOrDefault(winner, winner)}" : "none yet")}.");
+        if (robustness is not null)
+        {
+            RenderRobustness(robustness, output);
+        }
     }
+
+    private static void RenderRobustness(AwardRobustnessResult r, TextWriter output)
+    {
+        output.WriteLine();
+        output.WriteLine("Robustness of the points award (diagnostic only: nothing here changes the award)");
+        foreach (var w in r.WithoutBid)
+        {
+            output.WriteLine($"  Without {w.Without}: first place {w.Winner ?? "none"}; {Reversals(w)}");
+        }
+
+        foreach (var w in r.WithoutAssessor)
+        {
+            output.WriteLine($"  Without assessor {w.Without}: first place {w.Winner ?? "none"}{(w.WinnerChanged ? " (changed)" : "")}; {Reversals(w)}");
+        }
+
+        var sweeps = new TextTable("Criterion", "Published", "Lower reversal", "Upper reversal").AlignRight(1, 2, 3);
+        foreach (var s in r.Sweeps)
+        {
+            sweeps.Add(s.Criterion, P(s.Published), s.Lower is { } lower ? $"{P(lower)} ({s.LowerWinner})" : "none", s.Upper is { } upper ? $"{P(upper)} ({s.UpperWinner})" : "none");
+        }
+
+        output.WriteLine("  Weight of each criterion swept, the others in proportion: the nearest shares at which another bid comes first");
+        sweeps.Write(output, "  ");
+        if (r.Acceptability.Count > 0)
+        {
+            output.WriteLine($"  First place over {r.Draws} draws of the panel's scores from the assessors' own terms (seed {r.Seed}): "
+                + string.Join(", ", r.Acceptability.OrderByDescending(a => a.First).Select(a => $"{a.Bid} {P(a.First)}")));
+        }
+    }
+
+    private static string Reversals(AwardWithout w) => w.Reversed.Count == 0
+        ? "the order of the others stands"
+        : "reversed: " + string.Join("; ", w.Reversed.Select(p => $"{p.Above} and {p.Below}"));
+
+    private static string P(double share) => share.ToString("0.0 %", CultureInfo.InvariantCulture);
 
     private static string F(double x) => x.ToString("0.##", CultureInfo.InvariantCulture);
 

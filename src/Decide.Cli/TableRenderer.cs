@@ -84,7 +84,7 @@ public static class TableRenderer
 
         if (run.Award is { } award)
         {
-            AwardRenderer.Render(file, award, run.AwardAgreement!, output);
+            AwardRenderer.Render(file, award, run.AwardAgreement!, run.AwardRobustness, output);
         }
 
         if (robustness is not null)

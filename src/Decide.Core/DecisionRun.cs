@@ -29,7 +29,13 @@ public sealed record DecisionRun(PreparedEvaluation Prepared, AnalysisResult Ana
     /// <summary>How the points award and the closeness ranking agree, or null when the plan states no award method.</summary>
     public Award.AwardAgreement? AwardAgreement => Award is null ? null : Core.Award.AwardAgreement.Of(Award, Analysis);
 
-    /// <summary>The same run with its robustness checked (or checked again with other settings).</summary>
-    public DecisionRun WithRobustness(RobustnessOptions options) =>
-        this with { Robustness = RobustnessAnalysis.Run(Prepared, Analysis, options) };
+    /// <summary>The robustness of the points award (the binding rule the tender published); null when not asked for or when the plan states no award.</summary>
+    public Award.AwardRobustnessResult? AwardRobustness { get; init; }
+
+    /// <summary>The same run with its robustness checked (or checked again with other settings), the award's too when the plan states one.</summary>
+    public DecisionRun WithRobustness(RobustnessOptions options) => this with
+    {
+        Robustness = RobustnessAnalysis.Run(Prepared, Analysis, options),
+        AwardRobustness = Award is { } award ? Core.Award.AwardRobustness.Run(Prepared.Source, award, options) : null,
+    };
 }

@@ -83,7 +83,25 @@ public static class ResultsWriter
     public static ResultsDocument CreateDocument(DecisionRun run, Evaluation evaluation)
     {
         ArgumentNullException.ThrowIfNull(run);
-        return CreateDocument(run.Analysis, evaluation, run.Robustness, run.Award is { } report ? (report, run.AwardAgreement!) : null);
+        var document = CreateDocument(run.Analysis, evaluation, run.Robustness, run.Award is { } report ? (report, run.AwardAgreement!) : null);
+        return run.AwardRobustness is { } checks && document.PointsAward is { } award
+            ? document with { PointsAward = award with { Robustness = AwardRobustness(checks) } }
+            : document;
+    }
+
+    /// <summary>The award's robustness as the results document writes it.</summary>
+    public static AwardRobustnessEntry AwardRobustness(AwardRobustnessResult r)
+    {
+        ArgumentNullException.ThrowIfNull(r);
+        static AwardWithoutEntry Without(AwardWithout w) =>
+            new(w.Without, w.Winner, w.WinnerChanged, w.Reversed.Select(p => (IReadOnlyList<string>)[p.Above, p.Below]).ToArray());
+        return new AwardRobustnessEntry(
+            r.WithoutBid.Select(Without).ToArray(),
+            r.WithoutAssessor.Select(Without).ToArray(),
+            r.Sweeps.Select(s => new AwardSweepEntry(s.Criterion, s.Published, s.Lower, s.LowerWinner, s.Upper, s.UpperWinner)).ToArray(),
+            r.Acceptability.Select(a => new AwardAcceptabilityEntry(a.Bid, a.Ranks.ToArray(), a.First, a.Excluded)).ToArray(),
+            r.Draws,
+            r.Seed);
     }
 
     /// <summary>

@@ -1,5 +1,6 @@
 using System.Text.Json;
 using System.Text.Json.Nodes;
+using Decide.Core;
 using Decide.Core.Analysis;
 using Decide.Core.Robustness;
 using Json.Schema;
@@ -49,7 +50,8 @@ public sealed class SchemaTests
     {
         var read = EvaluationFileReader.ReadFile(RepositoryFiles.PathOf(file));
 
-        var results = ResultsWriter.ToJson(DecisionEngine.Analyse(read.Evaluation), read.Evaluation);
+        // The whole run, so that a points award's section is checked too.
+        var results = ResultsWriter.ToJson(ResultsWriter.CreateDocument(DecisionRun.Of(read.Evaluation), read.Evaluation));
 
         AssertValid(Schemas.Results, results);
     }
@@ -113,12 +115,8 @@ public sealed class SchemaTests
         Assert.False(Schemas.IsValid(Schemas.Results, results.ToJsonString()));
     }
 
-    private static string WithRobustness(EvaluationFile read)
-    {
-        var prepared = DecisionEngine.Prepare(read.Evaluation);
-        var result = prepared.Analyse();
-        return ResultsWriter.ToJson(result, read.Evaluation, RobustnessAnalysis.Run(prepared, result, new RobustnessOptions(Draws: 300, Seed: 1)));
-    }
+    private static string WithRobustness(EvaluationFile read) =>
+        ResultsWriter.ToJson(ResultsWriter.CreateDocument(DecisionRun.Of(read.Evaluation, new RobustnessOptions(Draws: 300, Seed: 1)), read.Evaluation));
 
     [Fact]
     public void Results_of_a_pairwise_evaluation_match_the_results_schema()

@@ -18,6 +18,7 @@ namespace Decide.Interchange.Results;
 /// <param name="AwaitingDecision">Bids whose flagged price has no recorded decision yet.</param>
 /// <param name="Winner">The winner under the binding result, or null when there is none yet.</param>
 /// <param name="Agreement">How the points award and the closeness ranking agree; null while prices are sealed (nothing is ranked).</param>
+/// <param name="Robustness">The award's robustness checks; null when robustness was not run.</param>
 public sealed record AwardSection(
     string Binding,
     string PanelScore,
@@ -32,7 +33,32 @@ public sealed record AwardSection(
     bool UnresolvedTie,
     IReadOnlyList<string> AwaitingDecision,
     string? Winner,
-    AwardAgreementEntry? Agreement);
+    AwardAgreementEntry? Agreement,
+    AwardRobustnessEntry? Robustness = null);
+
+/// <summary>The robustness of the points award.</summary>
+/// <param name="WithoutBid">The award without each bid that reached price.</param>
+/// <param name="WithoutAssessor">The award without each assessor.</param>
+/// <param name="Sweeps">Each criterion's weight swept: the nearest shares at which the first place changes.</param>
+/// <param name="Acceptability">Per bid, the share of draws at each rank (panel resampled).</param>
+/// <param name="Draws">How many draws.</param>
+/// <param name="Seed">Their seed.</param>
+public sealed record AwardRobustnessEntry(
+    IReadOnlyList<AwardWithoutEntry> WithoutBid,
+    IReadOnlyList<AwardWithoutEntry> WithoutAssessor,
+    IReadOnlyList<AwardSweepEntry> Sweeps,
+    IReadOnlyList<AwardAcceptabilityEntry> Acceptability,
+    int Draws,
+    ulong Seed);
+
+/// <summary>The award without one bid or assessor: the winner then and the pairs of the others reversed.</summary>
+public sealed record AwardWithoutEntry(string Without, string? Winner, bool WinnerChanged, IReadOnlyList<IReadOnlyList<string>> Reversed);
+
+/// <summary>A criterion's weight swept: the published share and the nearest shares below and above at which another bid comes first.</summary>
+public sealed record AwardSweepEntry(string Criterion, double Published, double? Lower, string? LowerWinner, double? Upper, string? UpperWinner);
+
+/// <summary>A bid's share of draws at each rank, its first-place share and the share of draws that excluded it.</summary>
+public sealed record AwardAcceptabilityEntry(string Bid, IReadOnlyList<double> Ranks, double First, double Excluded);
 
 /// <summary>A price formula as the tender states it.</summary>
 /// <param name="Formula">The file's word for it.</param>
