@@ -7,7 +7,12 @@ internal sealed partial class RecordWriter
 {
     private void Results()
     {
-        _flow.Section("5 Decision matrix and ranking");
+        _flow.Section(_content.Award is null ? "5 Decision matrix and ranking" : "5 Award and ranking");
+        if (_content.Award is { } award)
+        {
+            Award(award);
+        }
+
         var analysis = _content.Analysis;
         var scale = Evaluation.RatingScale;
         _flow.Heading("Aggregated decision matrix");
@@ -31,19 +36,21 @@ internal sealed partial class RecordWriter
                 }.Where(s => s is not null)),
             ]));
 
-        _flow.Heading("Ranking", keepWith: 120);
+        _flow.Heading(_content.Award is null ? "Ranking" : $"Ranking by closeness ({(_content.Award.Method.Binding == Decide.Core.Award.BindingResult.Closeness ? "binding" : "supporting analysis")})", keepWith: 120);
         _flow.Table(
             [new("Rank", 0.7, CellAlign.Right), new("Alternative", 4), new("Closeness CC", 1.5, CellAlign.Right), new("d⁺ (from best)", 1.5, CellAlign.Right), new("d⁻ (from worst)", 1.5, CellAlign.Right)],
             RecordText.RankingRows(Evaluation, analysis),
             boldColumns: 0);
         if (analysis.Excluded.Count > 0)
         {
-            _flow.Paragraph("Not ranked (failed a pass/fail gate):", _style.BodyBold, after: 2, keepWith: 50);
+            _flow.Paragraph("Not ranked (failed a pass/fail gate, or excluded by the published award):", _style.BodyBold, after: 2, keepWith: 50);
             var notes = Evaluation.Gates.Where(g => !g.Passed).ToDictionary(g => (g.Alternative, g.Criterion), g => g.Note);
             _flow.Table(
                 [new("Alternative", 3), new("Gate failed", 3), new("Reason recorded", 6)],
-                analysis.Excluded.SelectMany(e => e.Gates.Select(g => (IReadOnlyList<string>)
-                    [_names.Alternative(e.Alternative), _names.Criterion(g), notes.GetValueOrDefault((e.Alternative, g)) ?? ""])));
+                analysis.Excluded.SelectMany(e => e.Gates.Count == 0
+                    ? [(IReadOnlyList<string>)[_names.Alternative(e.Alternative), "(award rule)", e.Reason ?? ""]]
+                    : e.Gates.Select(g => (IReadOnlyList<string>)
+                        [_names.Alternative(e.Alternative), _names.Criterion(g), notes.GetValueOrDefault((e.Alternative, g)) ?? ""])));
         }
 
         if (analysis.Ranking.Count > 0)

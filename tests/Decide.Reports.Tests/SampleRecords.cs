@@ -37,9 +37,8 @@ internal static class SampleRecords
     public static RecordContent Build(EvaluationFile file, int draws = 2000)
     {
         var evaluation = file.Evaluation;
-        var prepared = DecisionEngine.Prepare(evaluation);
-        var analysis = prepared.Analyse();
-        var robustness = RobustnessAnalysis.Run(prepared, analysis, new RobustnessOptions(draws, 7, 2));
+        var run = Decide.Core.DecisionRun.Of(evaluation, new RobustnessOptions(draws, 7, 2));
+        var (analysis, robustness) = (run.Analysis, run.Robustness!);
         var snapshot = Encoding.UTF8.GetBytes(EvaluationFileWriter.ToJson(file));
         var first = evaluation.Assessors[0];
         return new RecordContent(
@@ -56,7 +55,10 @@ internal static class SampleRecords
             "0.1.0-test",
             snapshot,
             At,
-            SelfSignedCertificate.Note);
+            SelfSignedCertificate.Note,
+            run.Award,
+            run.AwardAgreement,
+            run.AwardRobustness);
     }
 
     private static string FindRoot()

@@ -206,7 +206,7 @@ public static class PointsAward
         {
             foreach (var row in running.Where(r => r.OpenPrice > plan.Price.Budget))
             {
-                row.Exclude(AwardExclusion.OverBudget, Invariant($"price {row.OpenPrice:0.##} above the budget of {plan.Price.Budget:0.##}"));
+                row.Exclude(AwardExclusion.OverBudget, Invariant($"price {row.OpenPrice:#,0.##} above the budget of {plan.Price.Budget:#,0.##}"));
             }
 
             running.RemoveAll(r => r.Excluded is not null);
@@ -267,13 +267,13 @@ public static class PointsAward
             var mean = passed.Where(r => !ReferenceEquals(r, row)).Average(r => r.OpenPrice);
             if (row.OpenPrice < mean * (1 - (percent / 100)) - Tolerance)
             {
-                return Invariant($"{1 - (row.OpenPrice / mean):P1} below the mean of the other admissible prices ({mean:0.##}); the rule flags more than {percent / 100:P0}");
+                return Invariant($"{1 - (row.OpenPrice / mean):P1} below the mean of the other admissible prices ({mean:#,0.##}); the rule flags more than {percent / 100:P0}");
             }
         }
 
         if (rule is { Estimate: { } estimate, BelowEstimatePercent: { } belowEstimate } && row.OpenPrice < estimate * (1 - (belowEstimate / 100)) - Tolerance)
         {
-            return Invariant($"{1 - (row.OpenPrice / estimate):P1} below the estimate ({estimate:0.##}); the rule flags more than {belowEstimate / 100:P0}");
+            return Invariant($"{1 - (row.OpenPrice / estimate):P1} below the estimate ({estimate:#,0.##}); the rule flags more than {belowEstimate / 100:P0}");
         }
 
         return null;

@@ -1,4 +1,5 @@
 using Decide.Core.Analysis;
+using Decide.Core.Award;
 using Decide.Core.Model;
 using Decide.Core.Robustness;
 
@@ -23,6 +24,9 @@ namespace Decide.Reports.Content;
 /// as <c>evaluation.json</c>; its SHA-256 is the record's fingerprint printed in every footer.
 /// </param>
 /// <param name="GeneratedAt">When the record was produced (printed, and used as the PDF's creation date).</param>
+/// <param name="Award">The published points award applied, when the plan states one.</param>
+/// <param name="AwardAgreement">How the award and the closeness ranking agree.</param>
+/// <param name="AwardRobustness">The award's robustness checks.</param>
 /// <param name="CertificateNote">
 /// What the reader should know about the signing certificate (for a self-signed one,
 /// <see cref="Signing.SelfSignedCertificate.Note"/>); null prints nothing.
@@ -40,7 +44,10 @@ public sealed record RecordContent(
     string SoftwareVersion,
     ReadOnlyMemory<byte> Snapshot,
     DateTimeOffset GeneratedAt,
-    string? CertificateNote = null)
+    string? CertificateNote = null,
+    AwardReport? Award = null,
+    AwardAgreement? AwardAgreement = null,
+    AwardRobustnessResult? AwardRobustness = null)
 {
     /// <summary>The SHA-256 of <see cref="Snapshot"/>, lower-case hex: the record's fingerprint.</summary>
     public string Fingerprint => RecordFingerprint.Of(Snapshot.Span);
