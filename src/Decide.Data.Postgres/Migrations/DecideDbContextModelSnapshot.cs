@@ -715,6 +715,9 @@ namespace Decide.Data.Postgres.Migrations
                     b.Property<DateTimeOffset?>("PlanLockedAt")
                         .HasColumnType("timestamp with time zone");
 
+                    b.Property<bool>("PointsAward")
+                        .HasColumnType("boolean");
+
                     b.Property<Guid?>("PreviousRevisionId")
                         .HasColumnType("uuid");
 

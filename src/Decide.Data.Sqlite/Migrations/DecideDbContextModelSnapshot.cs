@@ -690,6 +690,9 @@ namespace Decide.Data.Sqlite.Migrations
                     b.Property<DateTimeOffset?>("PlanLockedAt")
                         .HasColumnType("TEXT");
 
+                    b.Property<bool>("PointsAward")
+                        .HasColumnType("INTEGER");
+
                     b.Property<Guid?>("PreviousRevisionId")
                         .HasColumnType("TEXT");
 

@@ -61,6 +61,9 @@ public sealed class StoredEvaluation : IVersioned
     /// </summary>
     public bool TwoStage { get; private set; }
 
+    /// <summary>True when the locked plan publishes a points award (fixed when the plan is locked).</summary>
+    public bool PointsAward { get; private set; }
+
     /// <summary>When prices were opened (two stages); ratings and moderated values are final from then on.</summary>
     public DateTimeOffset? PricesOpenedAt { get; private set; }
 
@@ -101,13 +104,15 @@ public sealed class StoredEvaluation : IVersioned
     /// <exception cref="StageRefusedException">The evaluation is not at setup.</exception>
     /// <param name="at">When.</param>
     /// <param name="planHash">The locked plan's SHA-256.</param>
+    /// <param name="pointsAward">True when the plan publishes a points award.</param>
     /// <param name="twoStage">True when the plan's award keeps prices sealed until quality is moderated.</param>
-    public void LockPlan(DateTimeOffset at, string planHash, bool twoStage = false)
+    public void LockPlan(DateTimeOffset at, string planHash, bool pointsAward = false, bool twoStage = false)
     {
         Move(StageRules.LockPlan, EvaluationStage.PlanLocked);
         PlanLockedAt = at;
         PlanHash = planHash;
-        TwoStage = twoStage;
+        PointsAward = pointsAward;
+        TwoStage = pointsAward && twoStage;
     }
 
     /// <summary>
@@ -142,6 +147,7 @@ public sealed class StoredEvaluation : IVersioned
     /// </summary>
     public void MarkPricesOpenedByImport(DateTimeOffset at, string importedBy, bool twoStage)
     {
+        PointsAward = true;
         TwoStage = twoStage;
         PricesOpenedAt = at;
         PricesOpenedBy = importedBy;

@@ -31,6 +31,12 @@ public sealed class DemoSeeder(
 
     public const string Domain = "kestrel-vale.example";
 
+    /// <summary>The second demo: a published points award in two stages, seeded with its prices still sealed.</summary>
+    public const string PointsDemoFile = "park-grounds-points.json";
+
+    /// <summary>The second demo's organisation's mail domain.</summary>
+    public const string PointsDomain = "harrowmere.example";
+
     public async Task SeedIfEmptyAsync(CancellationToken ct = default)
     {
         if (!await roles.RoleExistsAsync(IdentitySetup.AdministratorRole))
@@ -43,13 +49,7 @@ public sealed class DemoSeeder(
             return;
         }
 
-        var path = Path.Combine(AppContext.BaseDirectory, "samples", DemoFile);
-        if (!File.Exists(path))
-        {
-            path = Path.Combine(environment.ContentRootPath, "..", "..", "samples", DemoFile);
-        }
-
-        var file = EvaluationFileReader.ReadFile(path);
+        var file = EvaluationFileReader.ReadFile(SamplePath(DemoFile));
         var admin = await Account("admin@decide.example", "Site Administrator", administrator: true);
         var facilitator = await Account($"facilitator@{Domain}", "Ione Castellane (Procurement Officer, facilitator)");
         var observer = await Account($"probity@{Domain}", "Wendell Saxby (Probity Observer)");
@@ -87,6 +87,7 @@ public sealed class DemoSeeder(
         AuditChain.Append(db, stored.Id.ToString(), new AuditEvent("evaluation.seeded", $"evaluations/{stored.Id}", null,
             $"demo evaluation imported from samples/{DemoFile}"), admin.Id, admin.Email, now);
         await db.SaveChangesAsync(ct);
+        var points = await SeedPointsDemoAsync(admin, now, ct);
 
         logger.LogInformation(
             "Seeded the demo evaluation {Reference}. Demo logins: administrator admin@decide.example; facilitator facilitator@{Domain}; assessors {Assessors}; price evaluator {Commercial}; observer probity@{Domain}; approver director@{Domain}.",
@@ -105,7 +106,57 @@ public sealed class DemoSeeder(
         Console.WriteLine($"  price evaluator  {commercial?.Id}@{Domain}");
         Console.WriteLine($"  observer         probity@{Domain}");
         Console.WriteLine($"  approver         director@{Domain}");
+        Console.WriteLine($"Second demo ({points}, a points award in two stages, prices still sealed):");
+        Console.WriteLine($"  facilitator      procurement@{PointsDomain}; price evaluator commercial@{PointsDomain}; assessors ashcroft, wren, lindqvist @{PointsDomain}");
         Console.WriteLine();
+    }
+
+    /// <summary>
+    /// The points demo at moderation with every rating and both moderated values in, its prices sealed: the
+    /// facilitator opens them, the price evaluator enters them (samples/README.md lists them), and the flagged price
+    /// is reviewed on the Award screen. Its own facilitator, so the first demo stays the demo facilitator's only one.
+    /// </summary>
+    private async Task<string> SeedPointsDemoAsync(DecideUser admin, DateTimeOffset now, CancellationToken ct)
+    {
+        var file = EvaluationFileReader.ReadFile(SamplePath(PointsDemoFile));
+        file = file with { Evaluation = file.Evaluation with { Values = [], LowPriceReviews = [] } };
+        var facilitator = await Account($"procurement@{PointsDomain}", "Odile Fairweather (Procurement Lead, facilitator)");
+        var commercial = await Account($"commercial@{PointsDomain}", "Bram Ellery (Commercial Officer, price evaluator)");
+        var observer = await Account($"audit@{PointsDomain}", "Nia Trevelyan (Internal Audit, observer)");
+        var approver = await Account($"head.parks@{PointsDomain}", "Caspar Holm (Head of Parks, approver)");
+        var accounts = new Dictionary<string, string>(StringComparer.Ordinal);
+        foreach (var assessor in file.Evaluation.Assessors)
+        {
+            accounts[assessor.Id] = (await Account($"{assessor.Id}@{PointsDomain}", assessor.Name)).Id;
+        }
+
+        await using var db = await factory.CreateDbContextAsync(ct);
+        var stored = EvaluationImporter.Add(db, file, accounts, facilitator.Id, admin.Id, now);
+        stored.CreatedAt = now.AddDays(-40);
+        stored.LockPlan(now.AddDays(-30), Convert.ToHexStringLower(SHA256.HashData(Encoding.UTF8.GetBytes(stored.PlanJson))), pointsAward: true, twoStage: true);
+        stored.OpenScoring(now.AddDays(-14));
+        stored.StartModeration(now.AddDays(-2));
+        stored.Panel.Add(new PanelMember { UserId = commercial.Id, Role = PanelRole.PriceEvaluator, AssessorCode = "commercial" });
+        stored.Panel.Add(new PanelMember { UserId = observer.Id, Role = PanelRole.Observer });
+        stored.Panel.Add(new PanelMember { UserId = approver.Id, Role = PanelRole.Approver });
+        foreach (var seat in stored.Panel.Where(p => p.Role is PanelRole.Assessor or PanelRole.PriceEvaluator))
+        {
+            seat.DeclarationSignedAt = now.AddDays(-29);
+            seat.DeclarationVersion = "2026-1";
+            seat.NamesConfirmedAt = now.AddDays(-14);
+            seat.SubmittedAt = seat.Role == PanelRole.Assessor ? now.AddDays(-3) : null;
+        }
+
+        AuditChain.Append(db, stored.Id.ToString(), new AuditEvent("evaluation.seeded", $"evaluations/{stored.Id}", null,
+            $"demo evaluation imported from samples/{PointsDemoFile}, its prices left sealed"), admin.Id, admin.Email, now);
+        await db.SaveChangesAsync(ct);
+        return stored.Reference;
+    }
+
+    private string SamplePath(string name)
+    {
+        var path = Path.Combine(AppContext.BaseDirectory, "samples", name);
+        return File.Exists(path) ? path : Path.Combine(environment.ContentRootPath, "..", "..", "samples", name);
     }
 
     private async Task<DecideUser> Account(string email, string name, bool administrator = false)

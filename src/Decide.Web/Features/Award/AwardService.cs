@@ -24,6 +24,9 @@ public sealed class AwardService(
     AuditWriter audit,
     TimeProvider clock)
 {
+    /// <summary>The award's robustness as the screen and the API show it: 2,000 draws, the default seed.</summary>
+    private static readonly Decide.Core.Robustness.RobustnessOptions ScreenChecks = new(2000);
+
     private const int MinText = 10;
     private const int MaxAsked = 8_000;
     private const int MaxAnswer = 20_000;
@@ -35,7 +38,7 @@ public sealed class AwardService(
         await using var db = await factory.CreateDbContextAsync(ct);
         var m = await access.LoadAsync(db, id, ct);
         ResultsService.RequireResultsVisible(m, "see the award");
-        return await ViewAsync(db, m.Evaluation, ct);
+        return await ViewAsync(db, m, ct);
     }
 
     /// <summary>
@@ -143,7 +146,7 @@ public sealed class AwardService(
 
             audit.Record(db, id, new AuditEvent("low-price.reviewed", $"evaluations/{id}/low-price-reviews/{bid}", before, Describe(row)));
             await db.SaveChangesAsync(ct);
-            return await ViewAsync(db, e, ct);
+            return await ViewAsync(db, m, ct);
         }, ct);
 
     /// <summary>
@@ -161,8 +164,9 @@ public sealed class AwardService(
         return (run.Award!, run.AwardAgreement);
     }
 
-    private async Task<AwardView> ViewAsync(DecideDbContext db, StoredEvaluation e, CancellationToken ct)
+    private async Task<AwardView> ViewAsync(DecideDbContext db, Membership m, CancellationToken ct)
     {
+        var e = m.Evaluation;
         var file = await composer.ComposeAsync(db, e, ct);
         if (file.Evaluation.Award is null)
         {
@@ -170,9 +174,14 @@ public sealed class AwardService(
         }
 
         var (report, agreement) = AwardOf(e, file.Evaluation);
+        var section = ResultsWriter.AwardSection(report, agreement, file.Evaluation);
+        if (!e.PricesSealed)
+        {
+            section = section with { Robustness = ResultsWriter.AwardRobustness(AwardRobustness.Run(file.Evaluation, report, ScreenChecks)) };
+        }
+
         var rows = await db.LowPriceReviews.AsNoTracking().Where(r => r.EvaluationId == e.Id).OrderBy(r => r.Id).ToListAsync(ct);
-        return new AwardView(e.Id, e.Reference, e.TwoStage, e.PricesSealed, e.PricesOpenedAt,
-            ResultsWriter.AwardSection(report, agreement, file.Evaluation), rows.Select(View).ToArray());
+        return new AwardView(EvaluationStore.Summarise(e, m.Roles), e.TwoStage, e.PricesSealed, e.PricesOpenedAt, section, rows.Select(View).ToArray());
     }
 
     private static LowPriceReviewView View(LowPriceReviewEntry r) =>

@@ -1,4 +1,5 @@
 using Decide.Interchange.Results;
+using Decide.Web.Features.Evaluations;
 
 namespace Decide.Web.Features.Award;
 
@@ -6,16 +7,14 @@ namespace Decide.Web.Features.Award;
 /// The published points award of an evaluation as the panel sees it: the table a bidder can recompute (the results
 /// document's <c>pointsAward</c> section), where the stages are, and the reviews of abnormally low prices.
 /// </summary>
-/// <param name="Evaluation">The evaluation's id.</param>
-/// <param name="Reference">Its reference.</param>
+/// <param name="Summary">The evaluation as the reader sees it.</param>
 /// <param name="TwoStage">True when prices stay sealed until quality moderation is closed.</param>
 /// <param name="PricesSealed">True while they are sealed: the table then holds quality points and thresholds only.</param>
 /// <param name="PricesOpenedAt">When the prices were opened.</param>
 /// <param name="Award">The table, the method as stated, exclusions, flags and the agreement with the closeness ranking.</param>
 /// <param name="Reviews">The reviews of flagged prices, with who recorded what and when.</param>
 public sealed record AwardView(
-    Guid Evaluation,
-    string Reference,
+    EvaluationSummary Summary,
     bool TwoStage,
     bool PricesSealed,
     DateTimeOffset? PricesOpenedAt,

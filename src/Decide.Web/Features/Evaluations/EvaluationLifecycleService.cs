@@ -43,7 +43,8 @@ public sealed class EvaluationLifecycleService(
                 throw new InvalidEvaluationException(check.Errors);
             }
 
-            m.Evaluation.LockPlan(clock.GetUtcNow(), Sha256(m.Evaluation.PlanJson), EvaluationComposer.ReadPlan(m.Evaluation).Evaluation.Award?.TwoStage == true);
+            var award = EvaluationComposer.ReadPlan(m.Evaluation).Evaluation.Award;
+            m.Evaluation.LockPlan(clock.GetUtcNow(), Sha256(m.Evaluation.PlanJson), award is not null, award?.TwoStage == true);
             return check.Consistency;
         }, ct);
 

@@ -92,6 +92,11 @@ public partial class EvaluationOverview
     {
         var plan = _plan!;
         yield return ("Rating scale (bids are rated in these terms)", plan.RatingScale);
+        if (plan.Weighting == WeightingMethod.Points)
+        {
+            yield break;
+        }
+
         yield return plan.Weighting == WeightingMethod.Importance
             ? ("Importance scale (criteria are weighted in these terms)", plan.ImportanceScale)
             : ("Pairwise scale (criteria are compared in these terms)", plan.PairwiseScale);

@@ -11,7 +11,7 @@ using Microsoft.EntityFrameworkCore.Storage.ValueConversion;
 namespace Decide.Data.Sqlite.Migrations
 {
     [DbContext(typeof(DecideDbContext))]
-    [Migration("20261204015258_AwardStagesAndLowPriceReviews")]
+    [Migration("20261204021248_AwardStagesAndLowPriceReviews")]
     partial class AwardStagesAndLowPriceReviews
     {
         /// <inheritdoc />
@@ -692,6 +692,9 @@ namespace Decide.Data.Sqlite.Migrations
 
                     b.Property<DateTimeOffset?>("PlanLockedAt")
                         .HasColumnType("TEXT");
+
+                    b.Property<bool>("PointsAward")
+                        .HasColumnType("INTEGER");
 
                     b.Property<Guid?>("PreviousRevisionId")
                         .HasColumnType("TEXT");

@@ -12,6 +12,13 @@ namespace Decide.Data.Postgres.Migrations
         /// <inheritdoc />
         protected override void Up(MigrationBuilder migrationBuilder)
         {
+            migrationBuilder.AddColumn<bool>(
+                name: "PointsAward",
+                table: "evaluations",
+                type: "boolean",
+                nullable: false,
+                defaultValue: false);
+
             migrationBuilder.AddColumn<DateTimeOffset>(
                 name: "PricesOpenedAt",
                 table: "evaluations",
@@ -68,6 +75,10 @@ namespace Decide.Data.Postgres.Migrations
         {
             migrationBuilder.DropTable(
                 name: "low_price_reviews");
+
+            migrationBuilder.DropColumn(
+                name: "PointsAward",
+                table: "evaluations");
 
             migrationBuilder.DropColumn(
                 name: "PricesOpenedAt",

@@ -12,7 +12,7 @@ using Npgsql.EntityFrameworkCore.PostgreSQL.Metadata;
 namespace Decide.Data.Postgres.Migrations
 {
     [DbContext(typeof(DecideDbContext))]
-    [Migration("20261204015301_AwardStagesAndLowPriceReviews")]
+    [Migration("20261204021251_AwardStagesAndLowPriceReviews")]
     partial class AwardStagesAndLowPriceReviews
     {
         /// <inheritdoc />
@@ -717,6 +717,9 @@ namespace Decide.Data.Postgres.Migrations
 
                     b.Property<DateTimeOffset?>("PlanLockedAt")
                         .HasColumnType("timestamp with time zone");
+
+                    b.Property<bool>("PointsAward")
+                        .HasColumnType("boolean");
 
                     b.Property<Guid?>("PreviousRevisionId")
                         .HasColumnType("uuid");

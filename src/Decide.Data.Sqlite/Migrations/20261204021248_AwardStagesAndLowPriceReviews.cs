@@ -11,6 +11,13 @@ namespace Decide.Data.Sqlite.Migrations
         /// <inheritdoc />
         protected override void Up(MigrationBuilder migrationBuilder)
         {
+            migrationBuilder.AddColumn<bool>(
+                name: "PointsAward",
+                table: "evaluations",
+                type: "INTEGER",
+                nullable: false,
+                defaultValue: false);
+
             migrationBuilder.AddColumn<DateTimeOffset>(
                 name: "PricesOpenedAt",
                 table: "evaluations",
@@ -67,6 +74,10 @@ namespace Decide.Data.Sqlite.Migrations
         {
             migrationBuilder.DropTable(
                 name: "low_price_reviews");
+
+            migrationBuilder.DropColumn(
+                name: "PointsAward",
+                table: "evaluations");
 
             migrationBuilder.DropColumn(
                 name: "PricesOpenedAt",
