@@ -76,9 +76,9 @@ public static class AwardAnalysis
     public static AwardReport Compute(Evaluation evaluation) => Compute(evaluation, evaluation.Assessors);
 
     /// <summary>
-    /// The quality stage of a two-stage award while prices are sealed: the evaluation is checked as for analysis
-    /// except that the price criterion has no values yet, and the award is computed without prices (quality points and
-    /// thresholds final, nothing ranked).
+    /// The award while prices are sealed or not all entered: the evaluation is checked as for analysis except that
+    /// bids may lack their price, and the award is computed with the prices there are (quality points and thresholds
+    /// final; nothing ranked while a bid that passed quality has no price).
     /// </summary>
     /// <exception cref="InvalidEvaluationException">The evaluation has problems other than the sealed prices; every one is listed.</exception>
     /// <exception cref="InvalidOperationException">The evaluation has no award method.</exception>
@@ -86,15 +86,16 @@ public static class AwardAnalysis
     {
         ArgumentNullException.ThrowIfNull(evaluation);
         var method = evaluation.Award ?? throw new InvalidOperationException("The evaluation states no award method.");
-        var sealedPrices = evaluation with { Values = evaluation.Values.Where(v => v.Criterion != method.PriceCriterion).ToArray() };
-        var pricePaths = evaluation.Alternatives.Select(a => JsonPath.Keys("$.values", a.Id, method.PriceCriterion)).ToHashSet(StringComparer.Ordinal);
-        var errors = Analysis.EvaluationValidator.Validate(sealedPrices).Where(e => !pricePaths.Contains(e.Path)).ToArray();
+        var priced = evaluation.Values.Where(v => v.Criterion == method.PriceCriterion).Select(v => v.Alternative).ToHashSet(StringComparer.Ordinal);
+        var missing = evaluation.Alternatives.Where(a => !priced.Contains(a.Id))
+            .Select(a => JsonPath.Keys("$.values", a.Id, method.PriceCriterion)).ToHashSet(StringComparer.Ordinal);
+        var errors = Analysis.EvaluationValidator.Validate(evaluation).Where(e => !missing.Contains(e.Path)).ToArray();
         if (errors.Length > 0)
         {
             throw new InvalidEvaluationException(errors);
         }
 
-        return Compute(sealedPrices);
+        return Compute(evaluation);
     }
 
     /// <summary>The award with the panel limited to <paramref name="panel"/> (leave-one-assessor-out and similar checks).</summary>

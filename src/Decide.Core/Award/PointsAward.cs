@@ -98,8 +98,8 @@ public sealed record AwardedBid(
 /// <param name="Bids">Every bid, in the order given.</param>
 /// <param name="UnresolvedTie">True when bids were still tied after every tie-break.</param>
 /// <param name="PricesSealed">
-/// True when the quality stage is done but prices are sealed: quality points and thresholds are final, nothing is
-/// ranked and no price is scored or flagged.
+/// True while a bid that passed quality has no price yet (sealed, or opened and not all entered): quality points and
+/// thresholds are final, the prices entered so far are shown, and nothing is ranked, scored on price or flagged.
 /// </param>
 public sealed record AwardResult(IReadOnlyList<AwardedBid> Bids, bool UnresolvedTie, bool PricesSealed = false)
 {
@@ -183,7 +183,7 @@ public static class PointsAward
         if (passed.Any(r => r.Bid.Price is null))
         {
             return new AwardResult(rows.Select(r => new AwardedBid(
-                r.Bid.Id, r.Points, r.Quality, r.Share, null, null, null, null, null, r.Excluded, r.Detail, null, null)).ToArray(),
+                r.Bid.Id, r.Points, r.Quality, r.Share, r.Bid.Price, null, null, null, null, r.Excluded, r.Detail, null, null)).ToArray(),
                 UnresolvedTie: false, PricesSealed: true);
         }
 

@@ -150,14 +150,15 @@ public sealed class AwardService(
         }, ct);
 
     /// <summary>
-    /// The award of a composed evaluation: the quality stage while prices are sealed, else the full run with its
-    /// agreement with the closeness ranking.
+    /// The award of a composed evaluation: the quality stage while prices are sealed or not all entered (with the
+    /// prices entered so far), else the full run with its agreement with the closeness ranking.
     /// </summary>
     internal static (AwardReport Report, AwardAgreement? Agreement) AwardOf(StoredEvaluation stored, Decide.Core.Model.Evaluation evaluation)
     {
-        if (stored.PricesSealed)
+        var quality = AwardAnalysis.QualityStage(evaluation);
+        if (stored.PricesSealed || quality.Result.PricesSealed)
         {
-            return (AwardAnalysis.QualityStage(evaluation), null);
+            return (quality, null);
         }
 
         var run = DecisionRun.Of(evaluation);
@@ -175,7 +176,7 @@ public sealed class AwardService(
 
         var (report, agreement) = AwardOf(e, file.Evaluation);
         var section = ResultsWriter.AwardSection(report, agreement, file.Evaluation);
-        if (!e.PricesSealed)
+        if (!report.Result.PricesSealed)
         {
             section = section with { Robustness = ResultsWriter.AwardRobustness(AwardRobustness.Run(file.Evaluation, report, ScreenChecks)) };
         }
