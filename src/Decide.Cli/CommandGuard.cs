@@ -49,11 +49,18 @@ public static class CommandGuard
     /// </summary>
     /// <exception cref="InvalidEvaluationException">The file is read but is not a valid evaluation.</exception>
     /// <exception cref="InputFileException">The file cannot be read.</exception>
-    public static EvaluationFile ReadEvaluation(string file)
+    public static EvaluationFile ReadEvaluation(string file) => Read(file, EvaluationFileReader.ReadFile);
+
+    /// <summary>Reads a plan (an evaluation file whose bids, panel and inputs may be absent), as <see cref="ReadEvaluation"/> does.</summary>
+    /// <exception cref="InvalidEvaluationException">The plan is read but is not valid.</exception>
+    /// <exception cref="InputFileException">The file cannot be read.</exception>
+    public static EvaluationFile ReadPlan(string file) => Read(file, path => EvaluationFileReader.ReadPlan(File.ReadAllBytes(path)));
+
+    private static EvaluationFile Read(string file, Func<string, EvaluationFile> read)
     {
         try
         {
-            return EvaluationFileReader.ReadFile(file);
+            return read(file);
         }
         catch (FileNotFoundException)
         {

@@ -41,6 +41,7 @@ public static class Program
         root.Subcommands.Add(new AnalyseCommand(stdout, stderr).Command);
         root.Subcommands.Add(new ReportCommand(stdout, stderr).Command);
         root.Subcommands.Add(new VerifyCommand(stdout, stderr).Command);
+        root.Subcommands.Add(new MethodologyCommand(stdout, stderr).Command);
         return root;
     }
 }

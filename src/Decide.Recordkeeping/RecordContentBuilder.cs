@@ -54,6 +54,7 @@ public static class RecordContentBuilder
         return new RecordContent(
             evaluation, analysis, checks, identity, panel, AssessorConsistency.FromAnalysis(evaluation, analysis), moderation,
             Audit: null, Approvals: [], SoftwareVersion, snapshot, generatedAt, certificateNote,
-            run.Award, run.AwardAgreement, run.AwardRobustness);
+            run.Award, run.AwardAgreement, run.AwardRobustness,
+            Reports.Methodology.MethodologyDocument.Fingerprint(MethodologyInputs.From(file)));
     }
 }

@@ -11,6 +11,19 @@ internal sealed partial class RecordWriter
     private void Method()
     {
         _flow.Section("2 Method");
+        if (_content.Methodology is { } methodology)
+        {
+            _flow.Facts(
+            [
+                ("Methodology (text) SHA-256", methodology),
+                ("As published at lock", _content.PublishedMethodology is null
+                    ? "not known (the record was made from a file outside the service)"
+                    : _content.PublishedMethodology == methodology
+                        ? "the same: the method published with the tender is the one applied"
+                        : $"DIFFERENT ({_content.PublishedMethodology}): the method applied is not the one published"),
+            ], labelWidth: 160);
+        }
+
         _flow.Paragraph("Assessors rate each alternative on each criterion with a term of a linguistic scale. Every term stands for a triangular fuzzy number (l, m, u): the value is most plausibly m and certainly between l and u. The scales and their numbers were fixed in the plan before bids were seen.");
         Scale("Rating scale", Evaluation.RatingScale);
         if (Evaluation.Weighting == WeightingMethod.Importance)

@@ -74,6 +74,26 @@ public sealed class AnalyseCommandTests : IDisposable
     }
 
     [Fact]
+    public void The_methodology_command_writes_the_pdf_and_the_text_whose_sha256_it_prints()
+    {
+        var folder = Directory.CreateTempSubdirectory("decide-methodology-");
+        try
+        {
+            var (pdf, text) = (Path.Combine(folder.FullName, "m.pdf"), Path.Combine(folder.FullName, "m.txt"));
+            var run = CliRun.Of("methodology", RepositoryFiles.PointsSample, "-o", pdf, "--text", text);
+
+            Assert.Equal(0, run.ExitCode);
+            Assert.StartsWith("%PDF-", File.ReadAllText(pdf)[..5], StringComparison.Ordinal);
+            var sha = Convert.ToHexStringLower(System.Security.Cryptography.SHA256.HashData(File.ReadAllBytes(text)));
+            Assert.Contains($"Fingerprint (SHA-256 of the text version): {sha}", run.Stdout, StringComparison.Ordinal);
+        }
+        finally
+        {
+            folder.Delete(recursive: true);
+        }
+    }
+
+    [Fact]
     public void Table_rows_follow_the_ranking_in_the_json()
     {
         using var json = JsonDocument.Parse(CliRun.Of("analyse", RepositoryFiles.MinimalExample).Stdout);

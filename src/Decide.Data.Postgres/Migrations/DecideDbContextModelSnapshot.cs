@@ -693,6 +693,10 @@ namespace Decide.Data.Postgres.Migrations
                         .HasMaxLength(4000)
                         .HasColumnType("character varying(4000)");
 
+                    b.Property<string>("MethodologyHash")
+                        .HasMaxLength(4000)
+                        .HasColumnType("character varying(4000)");
+
                     b.Property<int>("MinRationaleLength")
                         .HasColumnType("integer");
 

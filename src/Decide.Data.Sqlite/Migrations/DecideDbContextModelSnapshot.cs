@@ -668,6 +668,10 @@ namespace Decide.Data.Sqlite.Migrations
                         .HasMaxLength(4000)
                         .HasColumnType("TEXT");
 
+                    b.Property<string>("MethodologyHash")
+                        .HasMaxLength(4000)
+                        .HasColumnType("TEXT");
+
                     b.Property<int>("MinRationaleLength")
                         .HasColumnType("INTEGER");
 

@@ -61,6 +61,9 @@ public sealed class StoredEvaluation : IVersioned
     /// </summary>
     public bool TwoStage { get; private set; }
 
+    /// <summary>SHA-256 of the methodology's text version made from the plan when it was locked (the method published with the tender).</summary>
+    public string? MethodologyHash { get; private set; }
+
     /// <summary>True when the locked plan publishes a points award (fixed when the plan is locked).</summary>
     public bool PointsAward { get; private set; }
 
@@ -106,11 +109,13 @@ public sealed class StoredEvaluation : IVersioned
     /// <param name="planHash">The locked plan's SHA-256.</param>
     /// <param name="pointsAward">True when the plan publishes a points award.</param>
     /// <param name="twoStage">True when the plan's award keeps prices sealed until quality is moderated.</param>
-    public void LockPlan(DateTimeOffset at, string planHash, bool pointsAward = false, bool twoStage = false)
+    /// <param name="methodologyHash">SHA-256 of the methodology made from the locked plan.</param>
+    public void LockPlan(DateTimeOffset at, string planHash, bool pointsAward = false, bool twoStage = false, string? methodologyHash = null)
     {
         Move(StageRules.LockPlan, EvaluationStage.PlanLocked);
         PlanLockedAt = at;
         PlanHash = planHash;
+        MethodologyHash = methodologyHash;
         PointsAward = pointsAward;
         TwoStage = pointsAward && twoStage;
     }

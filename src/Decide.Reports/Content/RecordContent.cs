@@ -27,6 +27,8 @@ namespace Decide.Reports.Content;
 /// <param name="Award">The published points award applied, when the plan states one.</param>
 /// <param name="AwardAgreement">How the award and the closeness ranking agree.</param>
 /// <param name="AwardRobustness">The award's robustness checks.</param>
+/// <param name="Methodology">SHA-256 of the methodology's text version made from the plan the figures were computed with.</param>
+/// <param name="PublishedMethodology">SHA-256 of the methodology stored when the plan was locked (what was published), or null when not known.</param>
 /// <param name="CertificateNote">
 /// What the reader should know about the signing certificate (for a self-signed one,
 /// <see cref="Signing.SelfSignedCertificate.Note"/>); null prints nothing.
@@ -47,7 +49,9 @@ public sealed record RecordContent(
     string? CertificateNote = null,
     AwardReport? Award = null,
     AwardAgreement? AwardAgreement = null,
-    AwardRobustnessResult? AwardRobustness = null)
+    AwardRobustnessResult? AwardRobustness = null,
+    string? Methodology = null,
+    string? PublishedMethodology = null)
 {
     /// <summary>The SHA-256 of <see cref="Snapshot"/>, lower-case hex: the record's fingerprint.</summary>
     public string Fingerprint => RecordFingerprint.Of(Snapshot.Span);

@@ -18,6 +18,10 @@ public static class ExchangeEndpoints
             .WithSummary("The ranking (rank, bidder, closeness, d+, d−) as spreadsheet-safe CSV (panel, from moderation on).");
         group.MapGet("/{id:guid}/export/award.csv", AwardCsv)
             .WithSummary("The points award per bid and criterion (score, points), price, price points, total, rank, exclusions and flags, as spreadsheet-safe CSV (panel, from moderation on).");
+        group.MapGet("/{id:guid}/methodology.pdf", MethodologyPdf)
+            .WithSummary("The evaluation methodology for the tender pack, made from the plan, as a PDF (anyone on the panel; a draft before the plan is locked).");
+        group.MapGet("/{id:guid}/methodology.txt", MethodologyText)
+            .WithSummary("The evaluation methodology as plain text; its SHA-256 is the fingerprint stored when the plan is locked and printed in the record.");
         group.MapPost("/import", Import)
             .WithSummary("Store a decide-evaluation/1 file as a new evaluation at stage Setup, naming the facilitator and each assessor's account (administrator).");
         return api;
@@ -34,6 +38,12 @@ public static class ExchangeEndpoints
 
     private static async Task<FileContentHttpResult> AwardCsv(Guid id, ExchangeService service, CancellationToken ct) =>
         Download(await service.AwardCsvAsync(id, ct));
+
+    private static async Task<FileContentHttpResult> MethodologyPdf(Guid id, ExchangeService service, CancellationToken ct) =>
+        Download(await service.MethodologyAsync(id, pdf: true, ct));
+
+    private static async Task<FileContentHttpResult> MethodologyText(Guid id, ExchangeService service, CancellationToken ct) =>
+        Download(await service.MethodologyAsync(id, pdf: false, ct));
 
     private static async Task<Created<EvaluationSummary>> Import(ImportRequest request, ExchangeService service, CancellationToken ct)
     {

@@ -144,6 +144,14 @@ public sealed class TwoStageAwardTests(DecideWebFactory factory) : IClassFixture
         await s.SignDeclarationAsync(s.Carrow);
         await ApiAssert.OkAsync(await s.Facilitator.PostJsonAsync(s.Url("/lock-plan"), new { version = await s.VersionAsync() }));
         Assert.Equal(EvaluationStage.PlanLocked, await s.StageAsync());
+
+        // The methodology published with the tender is the one whose fingerprint was stored at lock.
+        var text = await (await s.Ashby.GetAsync(s.Url("/methodology.txt"))).Content.ReadAsByteArrayAsync();
+        var stored = (await s.DetailAsync()).GetProperty("methodologyHash").GetString();
+        Assert.Equal(Convert.ToHexStringLower(System.Security.Cryptography.SHA256.HashData(text)), stored);
+        Assert.Contains("Lowest-price ratio", System.Text.Encoding.UTF8.GetString(text), StringComparison.Ordinal);
+        var pdf = await s.Observer.GetAsync(s.Url("/methodology.pdf"));
+        Assert.Equal("application/pdf", pdf.Content.Headers.ContentType?.MediaType);
     }
 
     private static JsonElement Bid(JsonElement view, string bid)

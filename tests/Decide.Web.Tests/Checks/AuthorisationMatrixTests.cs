@@ -82,6 +82,8 @@ public sealed class AuthorisationMatrixTests(AuthorisationFixture fixture) : ICl
         ["GET /api/evaluations/{id:guid}/export/ratings.csv"] = "1433AAA3",
         ["GET /api/evaluations/{id:guid}/export/results.csv"] = "14AAAAA3",
         ["GET /api/evaluations/{id:guid}/export/award.csv"] = "14AAAAA3",
+        ["GET /api/evaluations/{id:guid}/methodology.pdf"] = "14AAAAA3",
+        ["GET /api/evaluations/{id:guid}/methodology.txt"] = "14AAAAA3",
         ["POST /api/evaluations/import"] = "1333333A",
         ["POST /api/analyses"] = "1AAAAAAA",
 

@@ -64,7 +64,8 @@ public sealed class DemoSeeder(
         await using var db = await factory.CreateDbContextAsync(ct);
         var stored = EvaluationImporter.Add(db, file, accounts, facilitator.Id, admin.Id, now);
         stored.CreatedAt = now.AddDays(-30);
-        stored.LockPlan(now.AddDays(-20), Convert.ToHexStringLower(SHA256.HashData(Encoding.UTF8.GetBytes(stored.PlanJson))));
+        stored.LockPlan(now.AddDays(-20), Convert.ToHexStringLower(SHA256.HashData(Encoding.UTF8.GetBytes(stored.PlanJson))),
+            methodologyHash: Reports.Methodology.MethodologyDocument.Fingerprint(Recordkeeping.MethodologyInputs.From(EvaluationComposer.ReadPlan(stored))));
         stored.OpenScoring(now.AddDays(-12));
         stored.StartModeration(now.AddDays(-1));
         stored.Panel.Add(new PanelMember { UserId = observer.Id, Role = PanelRole.Observer });
@@ -133,7 +134,8 @@ public sealed class DemoSeeder(
         await using var db = await factory.CreateDbContextAsync(ct);
         var stored = EvaluationImporter.Add(db, file, accounts, facilitator.Id, admin.Id, now);
         stored.CreatedAt = now.AddDays(-40);
-        stored.LockPlan(now.AddDays(-30), Convert.ToHexStringLower(SHA256.HashData(Encoding.UTF8.GetBytes(stored.PlanJson))), pointsAward: true, twoStage: true);
+        stored.LockPlan(now.AddDays(-30), Convert.ToHexStringLower(SHA256.HashData(Encoding.UTF8.GetBytes(stored.PlanJson))), pointsAward: true, twoStage: true,
+            Reports.Methodology.MethodologyDocument.Fingerprint(Recordkeeping.MethodologyInputs.From(EvaluationComposer.ReadPlan(stored))));
         stored.OpenScoring(now.AddDays(-14));
         stored.StartModeration(now.AddDays(-2));
         stored.Panel.Add(new PanelMember { UserId = commercial.Id, Role = PanelRole.PriceEvaluator, AssessorCode = "commercial" });

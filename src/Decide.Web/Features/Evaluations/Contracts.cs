@@ -23,7 +23,9 @@ public sealed record EvaluationDetail(
     Guid? PreviousRevisionId,
     string? RevisionReason,
     Guid? SupersededById,
-    bool LegalHold);
+    bool LegalHold,
+    string? MethodologyHash = null,
+    DateTimeOffset? PricesOpenedAt = null);
 
 /// <summary>Plan settings that are not part of the portable file.</summary>
 public sealed record EvaluationSettings(int MinRationaleLength, bool PricesVisibleToAssessors, int RequiredApprovals);

@@ -43,8 +43,10 @@ public sealed class EvaluationLifecycleService(
                 throw new InvalidEvaluationException(check.Errors);
             }
 
-            var award = EvaluationComposer.ReadPlan(m.Evaluation).Evaluation.Award;
-            m.Evaluation.LockPlan(clock.GetUtcNow(), Sha256(m.Evaluation.PlanJson), award is not null, award?.TwoStage == true);
+            var plan = EvaluationComposer.ReadPlan(m.Evaluation);
+            var award = plan.Evaluation.Award;
+            m.Evaluation.LockPlan(clock.GetUtcNow(), Sha256(m.Evaluation.PlanJson), award is not null, award?.TwoStage == true,
+                Reports.Methodology.MethodologyDocument.Fingerprint(Recordkeeping.MethodologyInputs.From(plan)));
             return check.Consistency;
         }, ct);
 

@@ -112,7 +112,8 @@ public sealed class EvaluationService(
             panel,
             bids,
             new StageDates(e.CreatedAt, e.PlanLockedAt, e.ScoringOpenedAt, e.ModerationStartedAt, e.SignedOffAt),
-            e.PreviousRevisionId, e.RevisionReason, e.SupersededById, e.LegalHold);
+            e.PreviousRevisionId, e.RevisionReason, e.SupersededById, e.LegalHold,
+            e.MethodologyHash, e.PricesOpenedAt);
     }
 
     /// <summary>

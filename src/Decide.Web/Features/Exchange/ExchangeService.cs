@@ -90,6 +90,24 @@ public sealed partial class ExchangeService(
         }, ct);
 
     /// <summary>
+    /// The evaluation methodology for the tender pack, made from the plan (anyone on the panel; any stage, a draft
+    /// before the plan is locked): PDF or plain text. Its fingerprint (SHA-256 of the text) is the one stored when
+    /// the plan was locked; a download is audited with it.
+    /// </summary>
+    public Task<DownloadFile> MethodologyAsync(Guid id, bool pdf, CancellationToken ct = default) =>
+        UnitOfWork.RunAsync(factory, async db =>
+        {
+            var m = await access.LoadAsync(db, id, ct);
+            m.Require(PanelRole.Facilitator, PanelRole.Observer, PanelRole.Approver, PanelRole.Assessor, PanelRole.PriceEvaluator);
+            var input = Recordkeeping.MethodologyInputs.From(EvaluationComposer.ReadPlan(m.Evaluation));
+            var content = pdf
+                ? Reports.Methodology.MethodologyDocument.Pdf(input, clock.GetUtcNow())
+                : Encoding.UTF8.GetBytes(Reports.Methodology.MethodologyDocument.Text(input));
+            return await Download(db, m.Evaluation, "methodology.downloaded", pdf ? "methodology.pdf" : "methodology.txt",
+                FileName(m.Evaluation, pdf ? "-methodology.pdf" : "-methodology.txt"), pdf ? "application/pdf" : "text/plain; charset=utf-8", content, ct);
+        }, ct);
+
+    /// <summary>
     /// The points award as a spreadsheet a bidder's figures can be checked against: one row per bid with, per
     /// quality criterion, the panel's score and the quality points, then quality, price, price points (or the
     /// figure), total, rank and any exclusion or flag. While prices are sealed, the quality stage alone.

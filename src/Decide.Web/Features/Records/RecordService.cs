@@ -236,7 +236,7 @@ public sealed class RecordService(
         Add("Signed off", stored.SignedOffAt);
         var identity = new RecordIdentity(stored.Title, stored.Reference, stored.Organisation ?? "(organisation not given)",
             stored.Stage == EvaluationStage.SignedOff ? $"Signed off (revision {stored.Revision})" : $"{stored.Stage} (revision {stored.Revision})", dates);
-        return content with { Identity = identity, Panel = panel, Moderation = moderation, Approvals = approvals };
+        return content with { Identity = identity, Panel = panel, Moderation = moderation, Approvals = approvals, PublishedMethodology = stored.MethodologyHash };
     }
 
     private static IReadOnlyList<string> Originals(string json)

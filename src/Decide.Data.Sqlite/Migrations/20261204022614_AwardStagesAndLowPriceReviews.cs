@@ -1,10 +1,9 @@
 ﻿using System;
 using Microsoft.EntityFrameworkCore.Migrations;
-using Npgsql.EntityFrameworkCore.PostgreSQL.Metadata;
 
 #nullable disable
 
-namespace Decide.Data.Postgres.Migrations
+namespace Decide.Data.Sqlite.Migrations
 {
     /// <inheritdoc />
     public partial class AwardStagesAndLowPriceReviews : Migration
@@ -12,30 +11,37 @@ namespace Decide.Data.Postgres.Migrations
         /// <inheritdoc />
         protected override void Up(MigrationBuilder migrationBuilder)
         {
+            migrationBuilder.AddColumn<string>(
+                name: "MethodologyHash",
+                table: "evaluations",
+                type: "TEXT",
+                maxLength: 4000,
+                nullable: true);
+
             migrationBuilder.AddColumn<bool>(
                 name: "PointsAward",
                 table: "evaluations",
-                type: "boolean",
+                type: "INTEGER",
                 nullable: false,
                 defaultValue: false);
 
             migrationBuilder.AddColumn<DateTimeOffset>(
                 name: "PricesOpenedAt",
                 table: "evaluations",
-                type: "timestamp with time zone",
+                type: "TEXT",
                 nullable: true);
 
             migrationBuilder.AddColumn<string>(
                 name: "PricesOpenedBy",
                 table: "evaluations",
-                type: "character varying(4000)",
+                type: "TEXT",
                 maxLength: 4000,
                 nullable: true);
 
             migrationBuilder.AddColumn<bool>(
                 name: "TwoStage",
                 table: "evaluations",
-                type: "boolean",
+                type: "INTEGER",
                 nullable: false,
                 defaultValue: false);
 
@@ -43,20 +49,20 @@ namespace Decide.Data.Postgres.Migrations
                 name: "low_price_reviews",
                 columns: table => new
                 {
-                    Id = table.Column<long>(type: "bigint", nullable: false)
-                        .Annotation("Npgsql:ValueGenerationStrategy", NpgsqlValueGenerationStrategy.IdentityByDefaultColumn),
-                    EvaluationId = table.Column<Guid>(type: "uuid", nullable: false),
-                    AlternativeCode = table.Column<string>(type: "character varying(4000)", maxLength: 4000, nullable: false),
-                    Asked = table.Column<string>(type: "character varying(8000)", maxLength: 8000, nullable: false),
-                    AskedBy = table.Column<string>(type: "character varying(4000)", maxLength: 4000, nullable: false),
-                    AskedAt = table.Column<DateTimeOffset>(type: "timestamp with time zone", nullable: false),
-                    Answer = table.Column<string>(type: "character varying(20000)", maxLength: 20000, nullable: true),
-                    AnsweredAt = table.Column<DateTimeOffset>(type: "timestamp with time zone", nullable: true),
-                    Decision = table.Column<string>(type: "character varying(16)", maxLength: 16, nullable: true),
-                    Reasons = table.Column<string>(type: "character varying(8000)", maxLength: 8000, nullable: true),
-                    DecidedBy = table.Column<string>(type: "character varying(4000)", maxLength: 4000, nullable: true),
-                    DecidedAt = table.Column<DateTimeOffset>(type: "timestamp with time zone", nullable: true),
-                    Version = table.Column<long>(type: "bigint", nullable: false)
+                    Id = table.Column<long>(type: "INTEGER", nullable: false)
+                        .Annotation("Sqlite:Autoincrement", true),
+                    EvaluationId = table.Column<Guid>(type: "TEXT", nullable: false),
+                    AlternativeCode = table.Column<string>(type: "TEXT", maxLength: 4000, nullable: false),
+                    Asked = table.Column<string>(type: "TEXT", maxLength: 8000, nullable: false),
+                    AskedBy = table.Column<string>(type: "TEXT", maxLength: 4000, nullable: false),
+                    AskedAt = table.Column<DateTimeOffset>(type: "TEXT", nullable: false),
+                    Answer = table.Column<string>(type: "TEXT", maxLength: 20000, nullable: true),
+                    AnsweredAt = table.Column<DateTimeOffset>(type: "TEXT", nullable: true),
+                    Decision = table.Column<string>(type: "TEXT", maxLength: 16, nullable: true),
+                    Reasons = table.Column<string>(type: "TEXT", maxLength: 8000, nullable: true),
+                    DecidedBy = table.Column<string>(type: "TEXT", maxLength: 4000, nullable: true),
+                    DecidedAt = table.Column<DateTimeOffset>(type: "TEXT", nullable: true),
+                    Version = table.Column<long>(type: "INTEGER", nullable: false)
                 },
                 constraints: table =>
                 {
@@ -75,6 +81,10 @@ namespace Decide.Data.Postgres.Migrations
         {
             migrationBuilder.DropTable(
                 name: "low_price_reviews");
+
+            migrationBuilder.DropColumn(
+                name: "MethodologyHash",
+                table: "evaluations");
 
             migrationBuilder.DropColumn(
                 name: "PointsAward",

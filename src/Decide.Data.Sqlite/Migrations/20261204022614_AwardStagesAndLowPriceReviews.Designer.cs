@@ -11,7 +11,7 @@ using Microsoft.EntityFrameworkCore.Storage.ValueConversion;
 namespace Decide.Data.Sqlite.Migrations
 {
     [DbContext(typeof(DecideDbContext))]
-    [Migration("20261204021248_AwardStagesAndLowPriceReviews")]
+    [Migration("20261204022614_AwardStagesAndLowPriceReviews")]
     partial class AwardStagesAndLowPriceReviews
     {
         /// <inheritdoc />
@@ -668,6 +668,10 @@ namespace Decide.Data.Sqlite.Migrations
                         .HasColumnType("INTEGER");
 
                     b.Property<string>("LegalHoldReason")
+                        .HasMaxLength(4000)
+                        .HasColumnType("TEXT");
+
+                    b.Property<string>("MethodologyHash")
                         .HasMaxLength(4000)
                         .HasColumnType("TEXT");
 

@@ -12,7 +12,7 @@ using Npgsql.EntityFrameworkCore.PostgreSQL.Metadata;
 namespace Decide.Data.Postgres.Migrations
 {
     [DbContext(typeof(DecideDbContext))]
-    [Migration("20261204021251_AwardStagesAndLowPriceReviews")]
+    [Migration("20261204022617_AwardStagesAndLowPriceReviews")]
     partial class AwardStagesAndLowPriceReviews
     {
         /// <inheritdoc />
@@ -693,6 +693,10 @@ namespace Decide.Data.Postgres.Migrations
                         .HasColumnType("boolean");
 
                     b.Property<string>("LegalHoldReason")
+                        .HasMaxLength(4000)
+                        .HasColumnType("character varying(4000)");
+
+                    b.Property<string>("MethodologyHash")
                         .HasMaxLength(4000)
                         .HasColumnType("character varying(4000)");
 
