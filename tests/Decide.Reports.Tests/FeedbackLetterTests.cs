@@ -73,4 +73,32 @@ public sealed class FeedbackLetterTests
 
         Assert.Contains("'nobody' is not an alternative", ex.Message);
     }
+
+    [Fact]
+    public void Under_a_points_award_the_letter_shows_the_bidders_and_the_winners_points_per_criterion_as_published()
+    {
+        // samples/park-grounds-points.json, worked with a calculator: Brackenridge method (8 + 8 + 9) / 3 = 8.33 → 20.83 of
+        // 25; Cobble Hill (the winner) 8.67 → 21.67; totals 75.44 and 76.83.
+        var file = Interchange.EvaluationFileReader.ReadFile(Path.Combine(SampleRecords.Root, "samples", "park-grounds-points.json"));
+        var content = SampleRecords.Build(file, draws: 0);
+
+        var text = PdfText.Of(SupplierFeedbackLetter.Render(content, "brackenridge")).Squeezed;
+
+        Assert.Contains(PdfText.Squeeze("Method statement and seasonal programme (25) 8.33 → 20.83 points 8.67 → 21.67 points"), text);
+        Assert.Contains(PdfText.Squeeze("Total 75.44 76.83"), text);
+        Assert.Contains(PdfText.Squeeze("Cobble Hill Horticulture"), text);
+        Assert.Contains(PdfText.Squeeze("Very good (8)"), text);
+        Assert.DoesNotContain(PdfText.Squeeze("Quickcut"), text, StringComparison.OrdinalIgnoreCase);
+        Assert.DoesNotContain(PdfText.Squeeze("Aldergate"), text, StringComparison.OrdinalIgnoreCase);
+    }
+
+    [Fact]
+    public void A_bid_excluded_by_a_threshold_is_told_which_and_shown_its_quality_points()
+    {
+        var file = Interchange.EvaluationFileReader.ReadFile(Path.Combine(SampleRecords.Root, "samples", "park-grounds-points.json"));
+        var text = PdfText.Of(SupplierFeedbackLetter.Render(SampleRecords.Build(file, draws: 0), "fernbrook")).Squeezed;
+
+        Assert.Contains(PdfText.Squeeze("took no part in the award: below a criterion's minimum"), text);
+        Assert.Contains(PdfText.Squeeze("Quality points 21.83"), text);
+    }
 }

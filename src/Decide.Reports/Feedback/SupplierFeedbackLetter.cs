@@ -1,5 +1,6 @@
 using System.Text.RegularExpressions;
 using Decide.Core.Analysis;
+using Decide.Core.Award;
 using Decide.Core.Model;
 using Decide.Reports.Content;
 using Decide.Reports.Fonts;
@@ -48,7 +49,10 @@ public static class SupplierFeedbackLetter
         var evaluation = content.Evaluation;
         var analysis = content.Analysis;
         var names = new RecordNames(evaluation);
-        var winner = analysis.Ranking.Count > 0 && analysis.Ranking.Count(r => r.Rank == 1) == 1 ? analysis.Ranking[0].Alternative : null;
+        var award = content.Award is { Method.Binding: BindingResult.Points } binding ? binding : null;
+        var winner = award is not null
+            ? award.Winner
+            : analysis.Ranking.Count > 0 && analysis.Ranking.Count(r => r.Rank == 1) == 1 ? analysis.Ranking[0].Alternative : null;
         var scrub = Scrubber(evaluation, supplier.Id, winner);
         var winnerName = winner is null ? null : names.Alternative(winner);
 
@@ -63,7 +67,12 @@ public static class SupplierFeedbackLetter
 
         var excluded = analysis.Excluded.FirstOrDefault(e => e.Alternative == supplier.Id);
         var own = analysis.Ranking.FirstOrDefault(r => r.Alternative == supplier.Id);
-        if (excluded is not null)
+        var awardExclusion = award?.Result.Bids.FirstOrDefault(b => b.Id == supplier.Id && b.Excluded is not null && b.Excluded != AwardExclusion.FailedGate);
+        if (awardExclusion is not null)
+        {
+            flow.Paragraph($"Your tender took no part in the award: {AwardText.Exclusion(awardExclusion.Excluded!.Value)} ({scrub(awardExclusion.ExclusionDetail ?? "")}). Below are your quality points on each criterion, with the panel's reasons.");
+        }
+        else if (excluded is not null)
         {
             var notes = evaluation.Gates.Where(g => g.Alternative == supplier.Id && !g.Passed)
                 .Select(g => $"{names.Criterion(g.Criterion)}{(g.Note is null ? "" : ": " + scrub(g.Note))}");
@@ -82,7 +91,12 @@ public static class SupplierFeedbackLetter
             flow.Paragraph("The evaluation has not produced a single highest-ranked tender; the panel will decide by the rule in its plan. Below are your scores with the panel's reasons.");
         }
 
-        if (excluded is null)
+        if (award is not null && (excluded is null || awardExclusion is not null))
+        {
+            Points(flow, award, supplier.Id, winner == supplier.Id ? null : winner, names);
+            Reasons(flow, style, content, supplier.Id, winner == supplier.Id ? null : winner, names, scrub);
+        }
+        else if (excluded is null)
         {
             Scores(flow, content, supplier.Id, winner == supplier.Id ? null : winner, names);
             flow.Paragraph($"Overall score (closeness coefficient, 0 to 1, higher is better): yours {(own is null ? "—" : RecordText.Closeness(own.Closeness))}"
@@ -131,6 +145,37 @@ public static class SupplierFeedbackLetter
         flow.Paragraph("Quality scores are the panel's combined rating on the published scale (its centre of gravity); measured values are as tendered.", flow.Style.Cell, flow.Style.MutedBrush);
     }
 
+    /// <summary>The published points: per criterion the panel's score and the points, then price, price points and total, for the supplier and the winner.</summary>
+    private static void Points(PageFlow flow, AwardReport award, string supplier, string? winner, RecordNames names)
+    {
+        var lines = award.Lines.ToDictionary(l => l.Alternative, StringComparer.Ordinal);
+        string Cell(string bid, int j) => lines.TryGetValue(bid, out var line)
+            ? $"{Number(line.Cells[j].Score)} → {Number(line.Award.CriterionPoints[j])} points"
+            : "—";
+        var rows = award.QualityCriteria.Select((id, j) => (IReadOnlyList<string>)(winner is null
+            ? [$"{names.Criterion(id)} ({Number(award.CriterionPoints[j])})", Cell(supplier, j)]
+            : [$"{names.Criterion(id)} ({Number(award.CriterionPoints[j])})", Cell(supplier, j), Cell(winner, j)])).ToList();
+        string Line(string bid, Func<AwardedBid, string> part) => lines.TryGetValue(bid, out var line) ? part(line.Award) : "—";
+        void Add(string label, Func<AwardedBid, string> part) =>
+            rows.Add(winner is null ? [label, Line(supplier, part)] : [label, Line(supplier, part), Line(winner, part)]);
+        Add("Quality points", b => Number(b.QualityPoints));
+        Add("Price", b => b.Price is { } p ? RecordText.Measured(p) : "not opened");
+        Add(award.Formula.GivesPoints ? $"Price points ({Number(award.PricePoints)})" : "Price figure (lowest first)", b => (award.Formula.GivesPoints ? b.PricePoints : b.Figure) is { } v ? Number(v) : "—");
+        Add("Total", b => b.Total is { } t ? Number(t) : "—");
+        Add("Rank", b => b.Rank?.ToString(System.Globalization.CultureInfo.InvariantCulture) ?? "—");
+
+        flow.Heading("Your points, as published in the methodology");
+        flow.Table(
+            winner is null
+                ? [new("Criterion (points)", 4), new("Your tender", 3)]
+                : [new("Criterion (points)", 4), new("Your tender", 3), new("Winning tender", 3)],
+            rows);
+        flow.Paragraph($"Each criterion: the panel's score on the 0–{Number(award.ScaleMaximum)} scale → score ÷ {Number(award.ScaleMaximum)} × the criterion's points. Price: {award.Formula.Name}, {award.Formula.Equation}. You can redo every figure with a calculator.",
+            flow.Style.Cell, flow.Style.MutedBrush);
+    }
+
+    private static string Number(double value) => value.ToString("0.##", System.Globalization.CultureInfo.InvariantCulture);
+
     private static void Reasons(PageFlow flow, ReportStyle style, RecordContent content, string supplier, string? winner, RecordNames names, Func<string, string> scrub)
     {
         var evaluation = content.Evaluation;
@@ -143,19 +188,23 @@ public static class SupplierFeedbackLetter
             foreach (var (alternative, whose) in winner is null ? [(supplier, "Your tender")] : new[] { (supplier, "Your tender"), (winner, "Highest-ranked tender") })
             {
                 var rows = evaluation.Ratings.Where(r => r.Alternative == alternative && r.Criterion == criterion.Id && r.Term is not null)
-                    .Select(r => (IReadOnlyList<string>)[whose, letters.GetValueOrDefault(r.Assessor, "Assessor"), r.Term!, scrub(r.Rationale ?? "")]).ToList();
+                    .Select(r => (IReadOnlyList<string>)[whose, letters.GetValueOrDefault(r.Assessor, "Assessor"), TermWords(evaluation, r.Term!), scrub(r.Rationale ?? "")]).ToList();
                 if (moderated.TryGetValue((alternative, criterion.Id), out var m))
                 {
-                    rows.Add([whose, "Panel (moderated)", m.Term, scrub(m.Reason)]);
+                    rows.Add([whose, "Panel (moderated)", TermWords(evaluation, m.Term), scrub(m.Reason)]);
                 }
 
                 if (rows.Count > 0)
                 {
-                    flow.Table([new("Tender", 1.6), new("Who", 1.4), new("Term", 0.8), new("Reason", 7)], rows);
+                    flow.Table([new("Tender", 1.6), new("Who", 1.4), new("Term", 1.4), new("Reason", 6.4)], rows);
                 }
             }
         }
     }
+
+    /// <summary>A term as a bidder reads it: its label, with the code after it.</summary>
+    private static string TermWords(Evaluation evaluation, string code) =>
+        evaluation.RatingScale.TryFind(code, out var step) ? $"{evaluation.RatingScale[step].Label} ({code})" : code;
 
     private static Func<string, string> Scrubber(Evaluation evaluation, string supplier, string? winner)
     {
