@@ -30,7 +30,7 @@ internal sealed partial class RecordWriter
         {
             Scale("Importance scale", Evaluation.ImportanceScale);
         }
-        else
+        else if (Evaluation.Weighting == WeightingMethod.Pairwise)
         {
             Scale("Pairwise comparison scale", Evaluation.PairwiseScale, chart: false);
         }
@@ -43,9 +43,12 @@ internal sealed partial class RecordWriter
         _flow.Paragraph("Where the panel moderated a cell, the agreed term replaces the aggregate in the decision matrix; the individual terms stay in the record (section 7 and the appendix). Numeric criteria (such as price) enter as exact values.");
 
         _flow.Heading("Weighting");
-        _flow.Paragraph(Evaluation.Weighting == WeightingMethod.Importance
-            ? "Each assessor rated the importance of every criterion (and of each criterion group) with a term of the importance scale; the panel's fuzzy weight is the aggregate of those terms. A grouped criterion's weight is its group's weight multiplied by its weight within the group."
-            : "Each assessor compared the criteria (and groups) in pairs. The panel's judgements are combined by the element-wise geometric mean, and fuzzy weights follow from Buckley's geometric-mean method (1985). A grouped criterion's weight is its group's weight multiplied by its weight within the group.");
+        _flow.Paragraph(Evaluation.Weighting switch
+        {
+            WeightingMethod.Importance => "Each assessor rated the importance of every criterion (and of each criterion group) with a term of the importance scale; the panel's fuzzy weight is the aggregate of those terms. A grouped criterion's weight is its group's weight multiplied by its weight within the group.",
+            WeightingMethod.Points => "The weights are the points published with the tender: each criterion's weight is its points divided by the total, used as a crisp triangle (s, s, s). Nobody on the panel judged the weights.",
+            _ => "Each assessor compared the criteria (and groups) in pairs. The panel's judgements are combined by the element-wise geometric mean, and fuzzy weights follow from Buckley's geometric-mean method (1985). A grouped criterion's weight is its group's weight multiplied by its weight within the group.",
+        });
         _flow.Paragraph("The crisp share printed beside each fuzzy weight is its centroid (l + m + u)/3, normalised so that all shares add up to 100%. The analysis itself uses the fuzzy weights.");
 
         _flow.Heading("Ranking: fuzzy TOPSIS");
@@ -57,7 +60,12 @@ internal sealed partial class RecordWriter
 
         _flow.Heading("Consistency of pairwise judgements");
         _flow.Paragraph("CR = CI/RI(n) with CI = (λmax − n)/(n − 1), computed on the matrix of middle values. Acceptable: CR ≤ 0.05 for n = 3, ≤ 0.08 for n = 4, ≤ 0.10 for larger matrices (Saaty 1994); the geometric consistency index GCI is reported beside it (thresholds 0.31, 0.35, 0.37; Aguarón and Moreno-Jiménez 2003). Matrices of order 2 or less are always consistent."
-            + (Evaluation.Weighting == WeightingMethod.Importance ? " In this evaluation the weights come from importance ratings, so these thresholds are stated for completeness only." : ""));
+            + (Evaluation.Weighting switch
+            {
+                WeightingMethod.Importance => " In this evaluation the weights come from importance ratings, so these thresholds are stated for completeness only.",
+                WeightingMethod.Points => " In this evaluation the weights are published points, so these thresholds are stated for completeness only.",
+                _ => "",
+            }));
         _flow.Paragraph($"Random index table used: {RandomIndex.TableName}.", _style.Cell);
         var orders = Enumerable.Range(3, RandomIndex.MaxOrder - 2).ToArray();
         _flow.Table(

@@ -30,7 +30,9 @@ internal sealed partial class RecordWriter
         _flow.Heading("Consistency of pairwise judgements, per assessor");
         if (_content.Consistency.Count == 0)
         {
-            _flow.Paragraph("Not applicable: the weights come from importance ratings, not pairwise comparisons.");
+            _flow.Paragraph(Evaluation.Weighting == Decide.Core.Model.WeightingMethod.Points
+                ? "Not applicable: the weights are the points published with the tender, not pairwise comparisons."
+                : "Not applicable: the weights come from importance ratings, not pairwise comparisons.");
         }
         else
         {
