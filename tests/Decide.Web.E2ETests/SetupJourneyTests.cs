@@ -62,7 +62,9 @@ public sealed class SetupJourneyTests(BrowserSite site) : IClassFixture<BrowserS
 
         await setup.OpenStepAsync("Scales");
         await setup.ChooseRatingScaleAsync("rating-5");
-        await Assertions.Expect(page.Locator("svg[aria-label^='Triangles of the scale']")).ToHaveCountAsync(4);
+        // Every built-in rating scale (Chen's, the five-term one and the two points scales) and both importance scales.
+        await Assertions.Expect(page.Locator("svg[aria-label^='Triangles of the scale']")).ToHaveCountAsync(
+            Decide.Web.Components.Pages.Setup.PlanDraft.RatingScales.Count + Decide.Web.Components.Pages.Setup.PlanDraft.ImportanceScales.Count);
         await Evidence.ScreenshotAsync(page, "setup-04-scales");
         await Evidence.AssertAccessibleAsync(page, "setup: scales");
         await setup.SaveAndContinueAsync("Plan saved");
