@@ -10,8 +10,7 @@ public static class MethodologyInputs
     public static MethodologyInput From(EvaluationFile file)
     {
         ArgumentNullException.ThrowIfNull(file);
-        var plan = file.Evaluation with { Alternatives = [], Assessors = [], Importance = [], Pairwise = [], Ratings = [], Values = [], Gates = [], Moderated = [], LowPriceReviews = [] };
-        return new MethodologyInput(plan, file.Metadata.Reference, file.Metadata.Organisation,
+        return new MethodologyInput(file.PlanOnly().Evaluation, file.Metadata.Reference, file.Metadata.Organisation,
             file.Metadata.CriterionDescriptions ?? new Dictionary<string, string>());
     }
 }

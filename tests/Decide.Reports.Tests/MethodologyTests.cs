@@ -15,8 +15,8 @@ public sealed class MethodologyTests
     private static MethodologyInput Input(Func<Core.Model.Evaluation, Core.Model.Evaluation>? edit = null)
     {
         var file = EvaluationFileReader.ReadFile(Path.Combine(SampleRecords.Root, "samples", "park-grounds-points.json"));
-        var plan = edit?.Invoke(file.Evaluation) ?? file.Evaluation;
-        return new MethodologyInput(plan with { Alternatives = [], Ratings = [], Values = [], Moderated = [], LowPriceReviews = [] },
+        var plan = file.PlanOnly().Evaluation;
+        return new MethodologyInput(edit?.Invoke(plan) ?? plan,
             file.Metadata.Reference, file.Metadata.Organisation, file.Metadata.CriterionDescriptions ?? new Dictionary<string, string>());
     }
 

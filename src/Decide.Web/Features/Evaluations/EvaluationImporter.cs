@@ -12,13 +12,7 @@ namespace Decide.Web.Features.Evaluations;
 public static class EvaluationImporter
 {
     /// <summary>The plan part of a file: everything but the panel, the bids and the inputs.</summary>
-    public static string PlanJson(EvaluationFile file) => EvaluationFileWriter.ToJson(file with
-    {
-        Evaluation = file.Evaluation with
-        {
-            Alternatives = [], Assessors = [], Importance = [], Pairwise = [], Ratings = [], Values = [], Gates = [], Moderated = [], LowPriceReviews = [],
-        },
-    });
+    public static string PlanJson(EvaluationFile file) => EvaluationFileWriter.ToJson(file.PlanOnly());
 
     /// <summary>Adds the evaluation to <paramref name="db"/> (not saved).</summary>
     /// <param name="db">Unit of work.</param>
