@@ -115,7 +115,7 @@ public sealed class EvaluationLifecycleService(
             return quality.Result.Bids.Where(b => b.Excluded is not null)
                 .Select(b => $"{b.Id} takes no part in price ({Decide.Core.Award.AwardText.Exclusion(b.Excluded!.Value)}: {b.ExclusionDetail}); its price is not opened.")
                 .ToArray();
-        }, ct);
+        }, ct, outcome: "quality closed and prices opened");
 
     /// <summary>
     /// Opens a new revision in setup, copying the plan, the panel (declarations to be signed again), the bids and
@@ -200,7 +200,7 @@ public sealed class EvaluationLifecycleService(
 
     private Task<TransitionResult> Transition(
         Guid id, TransitionRequest request, StageRule rule, string auditAction,
-        Func<DecideDbContext, Membership, Task<IReadOnlyList<string>>> move, CancellationToken ct) =>
+        Func<DecideDbContext, Membership, Task<IReadOnlyList<string>>> move, CancellationToken ct, string? outcome = null) =>
         UnitOfWork.RunAsync(factory, async db =>
         {
             var m = await access.LoadAsync(db, id, ct);
@@ -211,7 +211,7 @@ public sealed class EvaluationLifecycleService(
             var warnings = await move(db, m); // checks what the move needs, makes it on the entity, says what to know
             var to = m.Evaluation.Stage;
             audit.Record(db, id, new AuditEvent(auditAction, $"evaluations/{id}", from.ToString(),
-                to + (warnings.Count > 0 ? $" (warnings: {string.Join(" ", warnings)})" : "")));
+                (outcome ?? to.ToString()) + (warnings.Count > 0 ? $" (warnings: {string.Join(" ", warnings)})" : "")));
             await EvaluationStore.SaveAsync(db, m.Evaluation, ct);
             return new TransitionResult(EvaluationStore.Summarise(m.Evaluation, m.Roles), warnings);
         }, ct);
