@@ -118,6 +118,10 @@ internal static class AwardRenderer
 
         output.WriteLine("  Weight of each criterion swept, the others in proportion: the nearest shares at which another bid comes first");
         sweeps.Write(output, "  ");
+        foreach (var c in r.CriticalChanges)
+        {
+            output.WriteLine($"  {c.Below} passes {c.Above} soonest when {c.Criterion} goes from {P(c.Published)} to {P(c.Share)} of all points");
+        }
         if (r.Acceptability.Count > 0)
         {
             output.WriteLine($"  First place over {r.Draws} draws of the panel's scores from the assessors' own terms (seed {r.Seed}): "

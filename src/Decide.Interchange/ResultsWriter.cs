@@ -101,7 +101,8 @@ public static class ResultsWriter
             r.Sweeps.Select(s => new AwardSweepEntry(s.Criterion, s.Published, s.Lower, s.LowerWinner, s.Upper, s.UpperWinner)).ToArray(),
             r.Acceptability.Select(a => new AwardAcceptabilityEntry(a.Bid, a.Ranks.ToArray(), a.First, a.Excluded)).ToArray(),
             r.Draws,
-            r.Seed);
+            r.Seed,
+            r.CriticalChanges.Select(c => new AwardCriticalChangeEntry([c.Above, c.Below], c.Criterion, c.Published, c.Share)).ToArray());
     }
 
     /// <summary>

@@ -124,6 +124,15 @@ internal sealed partial class RecordWriter
                 s.Lower is { } lower ? $"{RecordText.Percent(lower)}: {_names.Alternative(s.LowerWinner!)}" : "none",
                 s.Upper is { } upper ? $"{RecordText.Percent(upper)}: {_names.Alternative(s.UpperWinner!)}" : "none",
             ]));
+        if (r.CriticalChanges.Count > 0)
+        {
+            _flow.Paragraph("The smallest change of one criterion's share that reverses each pair of neighbours in the award's order:", after: 2, keepWith: 40);
+            _flow.Table(
+                [new("Pair", 5), new("Criterion", 4), new("Published", 1.6, CellAlign.Right), new("Reversed at", 1.8, CellAlign.Right)],
+                r.CriticalChanges.Select(c => (IReadOnlyList<string>)
+                    [$"{_names.Alternative(c.Above)} / {_names.Alternative(c.Below)}", _names.Criterion(c.Criterion), RecordText.Percent(c.Published), RecordText.Percent(c.Share)]));
+        }
+
         if (r.Acceptability.Count > 0)
         {
             _flow.Paragraph($"First place when the panel's scores are drawn again from the assessors' own terms ({r.Draws} draws, seed {r.Seed}): "

@@ -42,13 +42,26 @@ public sealed record AwardAcceptability(string Bid, IReadOnlyList<double> Ranks,
 /// <param name="Acceptability">Rank shares over the draws, per bid in the order given.</param>
 /// <param name="Draws">How many draws.</param>
 /// <param name="Seed">Their seed.</param>
+/// <param name="CriticalChanges">For each pair of neighbours in the award's order, the criterion whose smallest change of share reverses them.</param>
 public sealed record AwardRobustnessResult(
     IReadOnlyList<AwardWithout> WithoutBid,
     IReadOnlyList<AwardWithout> WithoutAssessor,
     IReadOnlyList<AwardSweep> Sweeps,
     IReadOnlyList<AwardAcceptability> Acceptability,
     int Draws,
-    ulong Seed);
+    ulong Seed,
+    IReadOnlyList<AwardCriticalChange> CriticalChanges);
+
+/// <summary>
+/// The smallest change of one criterion's share of all points (on the 0.01 grid, the others in proportion) that puts
+/// <paramref name="Below"/> above <paramref name="Above"/>, its neighbour in the award's order.
+/// </summary>
+/// <param name="Above">The bid ranked just above.</param>
+/// <param name="Below">The bid ranked just below.</param>
+/// <param name="Criterion">The criterion whose change reverses them soonest.</param>
+/// <param name="Published">That criterion's published share.</param>
+/// <param name="Share">The share at which the two are reversed.</param>
+public sealed record AwardCriticalChange(string Above, string Below, string Criterion, double Published, double Share);
 
 /// <summary>
 /// Robustness of the points award: the same questions the closeness ranking answers (without each bid, without each
@@ -72,18 +85,20 @@ public static class AwardRobustness
         ArgumentNullException.ThrowIfNull(options);
         if (award.Result.PricesSealed)
         {
-            return new AwardRobustnessResult([], [], [], [], 0, options.Seed);
+            return new AwardRobustnessResult([], [], [], [], 0, options.Seed, []);
         }
 
         var baseOrder = Order(award.Result);
         var winner = award.Result.Ranking.Count(b => b.Rank == 1) == 1 ? award.Result.Ranking.First().Id : null;
+        var (sweeps, critical) = Sweeps(award, baseOrder, winner);
         return new AwardRobustnessResult(
             WithoutBid(award, baseOrder, winner),
             WithoutAssessor(evaluation, baseOrder, winner),
-            Sweeps(award, winner),
+            sweeps,
             Acceptability(evaluation, award, options),
             options.Draws,
-            options.Seed);
+            options.Seed,
+            critical);
     }
 
     private static List<AwardWithout> WithoutBid(AwardReport award, IReadOnlyList<string> baseOrder, string? winner)
@@ -116,16 +131,23 @@ public static class AwardRobustness
         return result;
     }
 
-    private static List<AwardSweep> Sweeps(AwardReport award, string? winner)
+    /// <summary>
+    /// Each criterion's share swept over the grid 0, 0.01, …, 1 (the others in proportion, the total kept), the award
+    /// recomputed at every point: the nearest shares either side of the published one with another first place, and,
+    /// for each pair of neighbours in the award's order, the criterion whose nearest share reverses them is closest.
+    /// </summary>
+    private static (List<AwardSweep> Sweeps, List<AwardCriticalChange> Critical) Sweeps(AwardReport award, IReadOnlyList<string> order, string? winner)
     {
         var plan = award.Plan;
         var points = plan.CriterionPoints.Append(plan.Price.MaxPoints).ToArray();
         var names = award.QualityCriteria.Append(award.Method.PriceCriterion).ToArray();
         var total = points.Sum();
         var sweeps = new List<AwardSweep>();
+        var pairs = order.Zip(order.Skip(1)).ToArray();
+        var best = new AwardCriticalChange?[pairs.Length];
         if (winner is null || total <= 0)
         {
-            return sweeps;
+            return (sweeps, []);
         }
 
         var steps = (int)Math.Round(1 / Step);
@@ -133,56 +155,67 @@ public static class AwardRobustness
         for (var j = 0; j < points.Length; j++)
         {
             var published = points[j] / total;
-            string? WinnerAt(double share)
+            var rest = total - points[j];
+            var ranks = new Dictionary<string, int>[steps + 1];
+            for (var i = 0; i <= steps; i++)
             {
-                var rest = total - points[j];
+                var share = i * Step;
                 for (var k = 0; k < points.Length; k++)
                 {
                     scaled[k] = k == j ? share * total : rest > 0 ? points[k] * (1 - share) * total / rest : 0;
                 }
 
                 var swept = plan with { CriterionPoints = scaled[..^1], Price = plan.Price with { MaxPoints = scaled[^1] } };
-                var r = PointsAward.Compute(swept, award.Inputs);
-                var first = r.Ranking.Where(b => b.Rank == 1).ToArray();
-                return first.Length == 1 ? first[0].Id : null;
+                ranks[i] = PointsAward.Compute(swept, award.Inputs).Bids.Where(b => b.Rank is not null).ToDictionary(b => b.Id, b => b.Rank!.Value, StringComparer.Ordinal);
             }
 
-            double? lower = null, upper = null;
-            string? lowerWinner = null, upperWinner = null;
-            for (var i = (int)Math.Floor(published * steps); i >= 0; i--)
+            string? First(int i)
             {
-                var share = i * Step;
-                if (share >= published - 1e-12)
-                {
-                    continue;
-                }
-
-                if (WinnerAt(share) is var w && w != winner)
-                {
-                    (lower, lowerWinner) = (share, w);
-                    break;
-                }
+                var first = ranks[i].Where(r => r.Value == 1).Select(r => r.Key).ToArray();
+                return first.Length == 1 ? first[0] : null;
             }
 
-            for (var i = (int)Math.Ceiling(published * steps); i <= steps; i++)
-            {
-                var share = i * Step;
-                if (share <= published + 1e-12)
-                {
-                    continue;
-                }
-
-                if (WinnerAt(share) is var w && w != winner)
-                {
-                    (upper, upperWinner) = (share, w);
-                    break;
-                }
-            }
-
+            var (lower, lowerWinner) = Nearest(published, steps, -1, i => First(i) is var w && w != winner, First);
+            var (upper, upperWinner) = Nearest(published, steps, +1, i => First(i) is var w && w != winner, First);
             sweeps.Add(new AwardSweep(names[j], published, lower, lowerWinner, upper, upperWinner));
+
+            for (var p = 0; p < pairs.Length; p++)
+            {
+                var (above, below) = pairs[p];
+                bool Reversed(int i) => ranks[i].TryGetValue(above, out var ra) && ranks[i].TryGetValue(below, out var rb) && ra > rb;
+                foreach (var direction in new[] { -1, +1 })
+                {
+                    if (Nearest(published, steps, direction, Reversed, _ => null).Share is { } share
+                        && (best[p] is not { } current || Math.Abs(share - published) < Math.Abs(current.Share - current.Published) - 1e-12))
+                    {
+                        best[p] = new AwardCriticalChange(above, below, names[j], published, share);
+                    }
+                }
+            }
         }
 
-        return sweeps;
+        return (sweeps, best.Where(b => b is not null).Select(b => b!).ToList());
+    }
+
+    /// <summary>The grid share nearest <paramref name="published"/> in <paramref name="direction"/> at which <paramref name="hit"/> holds.</summary>
+    private static (double? Share, string? Winner) Nearest(double published, int steps, int direction, Func<int, bool> hit, Func<int, string?> winner)
+    {
+        var from = direction < 0 ? (int)Math.Floor(published * steps) : (int)Math.Ceiling(published * steps);
+        for (var i = from; i >= 0 && i <= steps; i += direction)
+        {
+            var share = i * Step;
+            if (direction < 0 ? share >= published - 1e-12 : share <= published + 1e-12)
+            {
+                continue;
+            }
+
+            if (hit(i))
+            {
+                return (share, winner(i));
+            }
+        }
+
+        return (null, null);
     }
 
     private static List<AwardAcceptability> Acceptability(Evaluation evaluation, AwardReport award, RobustnessOptions options)

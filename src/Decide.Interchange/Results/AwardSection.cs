@@ -43,13 +43,18 @@ public sealed record AwardSection(
 /// <param name="Acceptability">Per bid, the share of draws at each rank (panel resampled).</param>
 /// <param name="Draws">How many draws.</param>
 /// <param name="Seed">Their seed.</param>
+/// <param name="CriticalChanges">For each pair of neighbours in the award's order, the criterion and share that reverse them soonest.</param>
 public sealed record AwardRobustnessEntry(
     IReadOnlyList<AwardWithoutEntry> WithoutBid,
     IReadOnlyList<AwardWithoutEntry> WithoutAssessor,
     IReadOnlyList<AwardSweepEntry> Sweeps,
     IReadOnlyList<AwardAcceptabilityEntry> Acceptability,
     int Draws,
-    ulong Seed);
+    ulong Seed,
+    IReadOnlyList<AwardCriticalChangeEntry> CriticalChanges);
+
+/// <summary>The smallest change of one criterion's share that reverses two neighbours of the award's order.</summary>
+public sealed record AwardCriticalChangeEntry(IReadOnlyList<string> Pair, string Criterion, double Published, double Share);
 
 /// <summary>The award without one bid or assessor: the winner then and the pairs of the others reversed.</summary>
 public sealed record AwardWithoutEntry(string Without, string? Winner, bool WinnerChanged, IReadOnlyList<IReadOnlyList<string>> Reversed);

@@ -89,4 +89,19 @@ public sealed class AwardRobustnessTests
         Assert.All(first, a => Assert.Equal(1, a.Ranks.Sum() + a.Excluded, 9));
         Assert.InRange(first.Single(a => a.Bid == "A").First, 0.01, 0.99); // A's 4 and 5 against B's 3 and 4: not certain
     }
+
+    [Fact]
+    public void The_critical_change_of_each_pair_of_neighbours_is_the_nearest_share_that_reverses_them()
+    {
+        // Method share t (price 1 − t): A = 30 + 60t, B = 50 + 20t, L = 100 − 70t, published t = 0.60. A and B meet at
+        // t = 0.5 (a tie kept by the higher quality points), so B passes A first at 0.49; B and L meet at t = 5/9 ≈ 0.556,
+        // so L passes B at 0.55. (With two criteria the price sweep is the same line read the other way.)
+        var critical = Run(Paradox(), draws: 0).CriticalChanges;
+        var ab = critical.Single(c => c.Above == "A");
+        Assert.Equal(("B", "method"), (ab.Below, ab.Criterion));
+        Assert.Equal(0.49, ab.Share, 9);
+        var bl = critical.Single(c => c.Above == "B");
+        Assert.Equal(("L", "method"), (bl.Below, bl.Criterion));
+        Assert.Equal(0.55, bl.Share, 9);
+    }
 }
