@@ -63,7 +63,9 @@ public partial class SetupPage
 
     private string Lead => _detail!.Summary.Stage switch
     {
-        EvaluationStage.Setup when Facilitates => "Prepare the evaluation step by step; each step is saved on its own. When the plan is complete and the assessors have submitted their weights, lock it.",
+        EvaluationStage.Setup when Facilitates => _draft?.Weighting == Decide.Core.Model.WeightingMethod.Points
+            ? "Prepare the evaluation step by step; each step is saved on its own. The weights are the points you publish, so nobody weighs: when the plan is complete, lock it, and the methodology for the tender pack is fixed with it."
+            : "Prepare the evaluation step by step; each step is saved on its own. When the plan is complete and the assessors have submitted their weights, lock it.",
         EvaluationStage.Setup => "The facilitator prepares the plan here.",
         EvaluationStage.PlanLocked => "The plan is locked and shown read-only. Register the remaining bids, then open scoring.",
         _ => "The plan is locked and scoring has opened: everything here is read-only.",
