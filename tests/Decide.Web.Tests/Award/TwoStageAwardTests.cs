@@ -76,6 +76,8 @@ public sealed class TwoStageAwardTests(DecideWebFactory factory) : IClassFixture
         var opened = await ApiAssert.OkAsync(await s.Facilitator.PostJsonAsync(s.Url("/open-prices"), new { version = await s.VersionAsync() }));
         Assert.Contains(opened.GetProperty("warnings").EnumerateArray(), w => w.GetString()!.Contains(Eastfold, StringComparison.Ordinal));
         Assert.Single(await s.AuditEntriesAsync("prices.opened"));
+        await ApiAssert.ProblemAsync(await s.Observer.GetAsync(s.Url("/results")), HttpStatusCode.Conflict, "is not entered");
+        Assert.True((await ApiAssert.OkAsync(await s.Observer.GetAsync(s.Url("/award")))).GetProperty("award").GetProperty("pricesSealed").GetBoolean());
 
         // Quality is final now; the price of a bid below the threshold stays sealed.
         await ApiAssert.ProblemAsync(await s.Facilitator.PutJsonAsync(s.Url($"/moderation/{Westmere}/{Quality}"),

@@ -71,6 +71,7 @@ public sealed partial class ExchangeService(
             ResultsService.RequireResultsVisible(m, "export the results");
             ResultsService.RequirePricesOpen(m, "export the ranking");
             var e = (await composer.ComposeAsync(db, m.Evaluation, ct)).Evaluation;
+            ResultsService.RequireEveryPrice(m.Evaluation, e, "export the ranking");
             var result = DecisionRun.Of(e).Analysis;
             var names = e.Alternatives.ToDictionary(a => a.Id, a => a.Name, StringComparer.Ordinal);
             var csv = new SpreadsheetCsv().Header("rank", "bidder", "name", "closeness", "d_plus", "d_minus", "failed_gates");

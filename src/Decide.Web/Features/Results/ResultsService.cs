@@ -57,6 +57,25 @@ public sealed class ResultsService(
         Moderation.ModerationService.RequireModerationReached(m, action);
     }
 
+    /// <summary>
+    /// After the prices of a two-stage evaluation are opened, the ranking needs every one of them: refused, naming the
+    /// bids still without a price, until the price evaluator has entered them all.
+    /// </summary>
+    internal static void RequireEveryPrice(StoredEvaluation stored, Decide.Core.Model.Evaluation evaluation, string action)
+    {
+        if (!stored.TwoStage || evaluation.Award is null)
+        {
+            return;
+        }
+
+        var quality = Decide.Core.Award.AwardAnalysis.QualityStage(evaluation);
+        if (quality.Result.PricesSealed)
+        {
+            var missing = quality.Result.Bids.Where(b => b.Excluded is null && b.Price is null).Select(b => b.Id).ToArray();
+            throw DomainProblem.Stage($"Cannot {action} yet: the price of {string.Join(", ", missing)} is not entered; the price evaluator enters every opened price first.");
+        }
+    }
+
     /// <summary>The ranking needs every price: refused while a two-stage evaluation's prices are sealed.</summary>
     internal static void RequirePricesOpen(Membership m, string action)
     {
@@ -72,7 +91,9 @@ public sealed class ResultsService(
         var m = await access.LoadAsync(db, id, ct);
         RequireResultsVisible(m, "see the results");
         RequirePricesOpen(m, "rank the bids");
-        return (EvaluationStore.Summarise(m.Evaluation, m.Roles), await composer.ComposeAsync(db, m.Evaluation, ct));
+        var file = await composer.ComposeAsync(db, m.Evaluation, ct);
+        RequireEveryPrice(m.Evaluation, file.Evaluation, "rank the bids");
+        return (EvaluationStore.Summarise(m.Evaluation, m.Roles), file);
     }
 
     private Task AuditViewAsync(Guid id, string shown, CancellationToken ct) =>

@@ -87,6 +87,7 @@ public sealed class SignOffService(
             }
 
             var file = await composer.ComposeAsync(db, e, ct);
+            Results.ResultsService.RequireEveryPrice(e, file.Evaluation, "ask for sign-off");
             var run = DecisionRun.Of(file.Evaluation);
             if (run.Award is { AwaitingDecision.Count: > 0 } award)
             {
