@@ -37,7 +37,7 @@ public sealed class AwardJourneyTests(BrowserSite site) : IClassFixture<BrowserS
 
         await award.OpenPricesAsync();
         await Assertions.Expect(award.Sealed).ToHaveCountAsync(0);
-        await Assertions.Expect(page.GetByText("fernbrook takes no part in price")).ToBeVisibleAsync();
+        await Assertions.Expect(page.GetByText("Fernbrook Landscapes takes no part in price")).ToBeVisibleAsync();
         watch.AssertClean();
 
         // The price evaluator, in a browser of their own, enters the four prices that were opened.

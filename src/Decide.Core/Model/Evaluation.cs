@@ -164,4 +164,7 @@ public sealed record Evaluation
 
     /// <summary>Method choices.</summary>
     public AnalysisOptions Options { get; init; } = new();
+
+    /// <summary>The name of alternative <paramref name="id"/> as people read it (the id itself when it is unknown).</summary>
+    public string AlternativeName(string id) => Alternatives.FirstOrDefault(a => a.Id == id)?.Name ?? id;
 }

@@ -73,7 +73,7 @@ public sealed class AwardService(
             var row = await db.LowPriceReviews.FirstOrDefaultAsync(r => r.EvaluationId == id && r.AlternativeCode == bid, ct);
             if (flagged.AbnormallyLowFlag is null && row?.Decision != FormatWords.Of(LowPriceDecision.Rejected))
             {
-                throw DomainProblem.Stage($"The price of \"{bid}\" is not flagged as abnormally low by the published rule; there is nothing to review.");
+                throw DomainProblem.Stage($"The price of {file.Evaluation.AlternativeName(bid)} is not flagged as abnormally low by the published rule; there is nothing to review.");
             }
 
             if (row is not null && request.Version != row.Version)
@@ -182,7 +182,8 @@ public sealed class AwardService(
         }
 
         var rows = await db.LowPriceReviews.AsNoTracking().Where(r => r.EvaluationId == e.Id).OrderBy(r => r.Id).ToListAsync(ct);
-        return new AwardView(EvaluationStore.Summarise(e, m.Roles), e.TwoStage, e.PricesSealed, e.PricesOpenedAt, section, rows.Select(View).ToArray());
+        return new AwardView(EvaluationStore.Summarise(e, m.Roles), e.TwoStage, e.PricesSealed, e.PricesOpenedAt, section, rows.Select(View).ToArray(),
+            file.Evaluation.Assessors.ToDictionary(a => a.Id, a => a.Name, StringComparer.Ordinal));
     }
 
     private static LowPriceReviewView View(LowPriceReviewEntry r) =>

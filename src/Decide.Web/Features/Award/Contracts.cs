@@ -13,13 +13,15 @@ namespace Decide.Web.Features.Award;
 /// <param name="PricesOpenedAt">When the prices were opened.</param>
 /// <param name="Award">The table, the method as stated, exclusions, flags and the agreement with the closeness ranking.</param>
 /// <param name="Reviews">The reviews of flagged prices, with who recorded what and when.</param>
+/// <param name="AssessorNames">The assessors' names by code, for the award recomputed without each of them.</param>
 public sealed record AwardView(
     EvaluationSummary Summary,
     bool TwoStage,
     bool PricesSealed,
     DateTimeOffset? PricesOpenedAt,
     AwardSection Award,
-    IReadOnlyList<LowPriceReviewView> Reviews);
+    IReadOnlyList<LowPriceReviewView> Reviews,
+    IReadOnlyDictionary<string, string> AssessorNames);
 
 /// <summary>The review of one flagged price.</summary>
 public sealed record LowPriceReviewView(

@@ -113,7 +113,7 @@ public sealed class EvaluationLifecycleService(
             e.OpenPrices(clock.GetUtcNow(), user.Id);
             db.MarkChanged(e);
             return quality.Result.Bids.Where(b => b.Excluded is not null)
-                .Select(b => $"{b.Id} takes no part in price ({Decide.Core.Award.AwardText.Exclusion(b.Excluded!.Value)}: {b.ExclusionDetail}); its price is not opened.")
+                .Select(b => $"{file.Evaluation.AlternativeName(b.Id)} takes no part in price ({Decide.Core.Award.AwardText.Exclusion(b.Excluded!.Value)}: {b.ExclusionDetail}); its price is not opened.")
                 .ToArray();
         }, ct, outcome: "quality closed and prices opened");
 

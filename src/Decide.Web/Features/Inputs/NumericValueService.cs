@@ -59,7 +59,7 @@ public sealed class NumericValueService(
                 var quality = Decide.Core.Award.AwardAnalysis.QualityStage((await composer.ComposeAsync(db, x.Evaluation, ct)).Evaluation);
                 if (quality.Result.Bids.FirstOrDefault(b => b.Id == bidder.Code) is { Excluded: { } why } excluded)
                 {
-                    throw DomainProblem.Stage($"\"{bidder.Code}\" takes no part in price ({Decide.Core.Award.AwardText.Exclusion(why)}: {excluded.ExclusionDetail}), so its price stays sealed.");
+                    throw DomainProblem.Stage($"{bidder.Name} takes no part in price ({Decide.Core.Award.AwardText.Exclusion(why)}: {excluded.ExclusionDetail}), so its price stays sealed.");
                 }
             }
 

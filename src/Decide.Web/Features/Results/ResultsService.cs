@@ -71,7 +71,7 @@ public sealed class ResultsService(
         var quality = Decide.Core.Award.AwardAnalysis.QualityStage(evaluation);
         if (quality.Result.PricesSealed)
         {
-            var missing = quality.Result.Bids.Where(b => b.Excluded is null && b.Price is null).Select(b => b.Id).ToArray();
+            var missing = quality.Result.Bids.Where(b => b.Excluded is null && b.Price is null).Select(b => evaluation.AlternativeName(b.Id)).ToArray();
             throw DomainProblem.Stage($"Cannot {action} yet: the price of {string.Join(", ", missing)} is not entered; the price evaluator enters every opened price first.");
         }
     }

@@ -91,7 +91,7 @@ public sealed class SignOffService(
             var run = DecisionRun.Of(file.Evaluation);
             if (run.Award is { AwaitingDecision.Count: > 0 } award)
             {
-                throw DomainProblem.Stage($"Cannot ask for sign-off: the price of {string.Join(", ", award.AwaitingDecision)} is flagged as abnormally low and the decision on its explanation is not recorded yet.");
+                throw DomainProblem.Stage($"Cannot ask for sign-off: the price of {string.Join(", ", award.AwaitingDecision.Select(file.Evaluation.AlternativeName))} is flagged as abnormally low and the decision on its explanation is not recorded yet.");
             }
 
             var hash = Fingerprint(file);

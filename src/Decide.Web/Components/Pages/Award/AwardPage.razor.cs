@@ -82,6 +82,8 @@ public partial class AwardPage
         return problem;
     }
 
+    private static string TieBreakWords(string word) => AwardText.Name(FormatWords.Parse(FormatWords.TieBreaks, word, TieBreak.EarlierSubmission));
+
     private string Name(string bid) => _view?.Award.Bids.FirstOrDefault(b => b.Alternative == bid)?.Name ?? bid;
 
     private static string CellTitle(AwardCellEntry cell) =>
