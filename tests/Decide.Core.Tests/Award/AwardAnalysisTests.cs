@@ -192,14 +192,28 @@ public sealed class AwardAnalysisTests
     }
 
     [Fact]
-    public void Agreement_with_the_closeness_ranking_names_both_first_places()
+    public void Agreement_with_the_closeness_ranking_names_both_first_places_and_measures_the_orders_by_kendall_tau()
     {
         var run = DecisionRun.Of(Tender());
-        var agreement = run.AwardAgreement!;
-        Assert.Equal("b", agreement.PointsWinner);
-        Assert.Equal(run.Analysis.Ranking[0].Alternative, agreement.ClosenessWinner);
-        Assert.Equal(3, agreement.Compared);
-        Assert.Equal(agreement.PointsWinner == agreement.ClosenessWinner, agreement.SameWinner);
+        var award = run.Award!; // points order b, a, c
+        static AnalysisResult Ranked(AnalysisResult analysis, params string[] order) => analysis with
+        {
+            Ranking = order.Select((id, i) => new RankedAlternative(id, i + 1, 1 - (0.1 * i), 0, 0, [])).ToArray(),
+        };
+
+        // The same order: τ-b = 1 and the same first place.
+        var same = AwardAgreement.Of(award, Ranked(run.Analysis, "b", "a", "c"));
+        Assert.Equal(("b", "b", true, 3), (same.PointsWinner, same.ClosenessWinner, same.SameWinner, same.Compared));
+        Assert.Equal(1, same.KendallTau!.Value, 9);
+
+        // The reverse order: every pair discordant, τ-b = −1.
+        var reverse = AwardAgreement.Of(award, Ranked(run.Analysis, "c", "a", "b"));
+        Assert.Equal(("c", false), (reverse.ClosenessWinner, reverse.SameWinner));
+        Assert.Equal(-1, reverse.KendallTau!.Value, 9);
+
+        // One swap among three (b, c, a): 2 concordant and 1 discordant pair of 3, τ-b = 1/3.
+        Assert.Equal(1.0 / 3, AwardAgreement.Of(award, Ranked(run.Analysis, "b", "c", "a")).KendallTau!.Value, 9);
+        Assert.Equal("b", AwardAgreement.Of(award, run.Analysis).PointsWinner);
     }
 
     [Fact]
