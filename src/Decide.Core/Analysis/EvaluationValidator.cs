@@ -71,6 +71,7 @@ public static class EvaluationValidator
                 return;
             }
 
+            _found.AddRange(Rounds.DesignChecks.Check(e));
             var excluded = Gates();
             switch (e.Weighting)
             {
@@ -638,6 +639,12 @@ public static class EvaluationValidator
                     continue;
                 }
 
+                if (e.Reviews is { } design && !design.IsAssigned(rating.Assessor, rating.Alternative))
+                {
+                    Add(At(), $"application \"{rating.Alternative}\" is not assigned to reviewer \"{rating.Assessor}\"; in this round they rate only the applications assigned to them");
+                    continue;
+                }
+
                 ref var cell = ref cells[(((a * n) + i) * m) + j];
                 if (cell is not null)
                 {
@@ -679,9 +686,9 @@ public static class EvaluationValidator
                     List<string>? declined = null;
                     for (var k = 0; k < rates.Length; k++)
                     {
-                        if (!rates[k])
+                        if (!rates[k] || e.Reviews?.IsAssigned(e.Assessors[k].Id, alternative.Id) == false)
                         {
-                            continue;
+                            continue; // not theirs to rate: nothing is expected, and nothing is imputed
                         }
 
                         var assessor = e.Assessors[k];
@@ -703,7 +710,7 @@ public static class EvaluationValidator
 
                     if (rated == 0 && !moderated.Contains((alternative.Id, criterion.Id)))
                     {
-                        var why = declined is not null ? $" (declined by {string.Join("; ", declined)})" : " (no assessor is assigned to it)";
+                        var why = declined is not null ? $" (declined by {string.Join("; ", declined)})" : e.Reviews is null ? " (no assessor is assigned to it)" : " (no reviewer who rates this criterion is assigned to the application)";
                         Add(JsonPath.Keys("$.ratings.*", alternative.Id, criterion.Id),
                             $"nobody rated alternative \"{alternative.Id}\" on criterion \"{criterion.Id}\"{why}; the analysis cannot proceed without at least one rating, and none is imputed");
                     }

@@ -28,8 +28,12 @@ public sealed record Criterion(
     IReadOnlyDictionary<string, string>? Descriptors = null,
     string? Unit = null);
 
-/// <summary>One of the things being chosen between (a bid, a supplier, a candidate).</summary>
-public sealed record Alternative(string Id, string Name);
+/// <summary>One of the things being chosen between (a bid, a supplier, a candidate, an application).</summary>
+/// <param name="Id">Unique among alternatives.</param>
+/// <param name="Name">Shown to people.</param>
+/// <param name="Requested">The amount an application asks for (grant rounds with a funding line), or null.</param>
+/// <param name="Topic">The field an application belongs to, matched against reviewers' topics when assigning, or null.</param>
+public sealed record Alternative(string Id, string Name, double? Requested = null, string? Topic = null);
 
 /// <summary>A panel member who rates.</summary>
 /// <param name="Id">Unique; <c>panel</c> is reserved.</param>
@@ -37,9 +41,12 @@ public sealed record Alternative(string Id, string Name);
 /// <param name="Weight">Relative weight of their judgement, fixed in the plan; positive; default 1.</param>
 /// <param name="Criteria">
 /// The criteria assigned to them; null means every linguistic criterion. They are expected to rate (or decline)
-/// every alternative on each assigned criterion.
+/// every alternative on each assigned criterion (or, under a <see cref="ReviewDesign"/>, every application assigned
+/// to them).
 /// </param>
-public sealed record Assessor(string Id, string Name, double Weight = 1, IReadOnlyList<string>? Criteria = null);
+/// <param name="Topics">Fields the reviewer knows, preferred when applications are assigned; null or empty for none.</param>
+public sealed record Assessor(
+    string Id, string Name, double Weight = 1, IReadOnlyList<string>? Criteria = null, IReadOnlyList<string>? Topics = null);
 
 /// <summary>An assessor's importance term for a criterion or a group.</summary>
 public sealed record ImportanceRating(string Assessor, string Node, string Term);
@@ -143,6 +150,15 @@ public sealed record Evaluation
 
     /// <summary>The records of prices flagged as abnormally low: what was asked, the answer and the decision.</summary>
     public IReadOnlyList<LowPriceReview> LowPriceReviews { get; init; } = [];
+
+    /// <summary>
+    /// Who reviews which application in a round where each reviewer reads only some of them, or null when every
+    /// assessor rates every alternative.
+    /// </summary>
+    public ReviewDesign? Reviews { get; init; }
+
+    /// <summary>The budget and rule of a round's funding line, or null when there is none.</summary>
+    public FundingPlan? Funding { get; init; }
 
     /// <summary>Importance ratings (used when <see cref="Weighting"/> is importance).</summary>
     public IReadOnlyList<ImportanceRating> Importance { get; init; } = [];

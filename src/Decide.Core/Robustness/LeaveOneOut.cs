@@ -53,6 +53,12 @@ public static class LeaveOneOut
         Importance = source.Importance.Where(r => r.Assessor != assessor).ToArray(),
         Pairwise = source.Pairwise.Where(p => p.Assessor != assessor).ToArray(),
 
+        // In a round, the others keep the applications they read; the plan's reviewers per application is no longer
+        // asked of the rest (their cells only need one rating each, as everywhere).
+        Reviews = source.Reviews is { } design
+            ? design with { ReviewersPerApplication = 1, Assigned = design.Assigned.Where(a => a.Assessor != assessor).ToArray() }
+            : null,
+
         // A moderated value is the panel's agreement, not one assessor's judgement: it stays, without their name.
         Moderated = source.Moderated.Select(m => m.AgreedBy is { } agreed && agreed.Contains(assessor)
             ? m with { AgreedBy = agreed.Where(a => a != assessor).ToArray() }

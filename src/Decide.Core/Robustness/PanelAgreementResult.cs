@@ -22,9 +22,28 @@ namespace Decide.Core.Robustness;
 /// The cells whose spread exceeds <paramref name="Tolerance"/>, largest spread first, then in alternative order and
 /// criterion order.
 /// </param>
+/// <param name="Reliability">
+/// Krippendorff's alpha over the linguistic cells, valid however many assessors rated each cell; null when no cell
+/// has two ratings.
+/// </param>
+/// <param name="OutsideConcordance">
+/// Assessors left out of Kendall's W because they did not rate every alternative in the running (a whole bid
+/// declined, or a round in which each reads only some applications): W compares complete rankings, and filling their
+/// gaps with the panel's values would overstate the agreement.
+/// </param>
 public sealed record PanelAgreementResult(
     int Tolerance,
     IReadOnlyList<AssessorAgreement> Assessors,
     Concordance? Concordance,
     IReadOnlyList<CellSpread> Cells,
-    IReadOnlyList<CellSpread> ForDiscussion);
+    IReadOnlyList<CellSpread> ForDiscussion,
+    PanelReliability? Reliability = null,
+    IReadOnlyList<string>? OutsideConcordance = null);
+
+/// <summary>
+/// Krippendorff's alpha over the panel's ratings, each (alternative, linguistic criterion) cell a unit and each
+/// assessor's term a value.
+/// </summary>
+/// <param name="Ordinal">On the order of the terms (the scale's steps): the measure for a linguistic scale.</param>
+/// <param name="Interval">On the centre of each term's triangle ((l + m + u) ∕ 3), for scales whose terms are unevenly spaced.</param>
+public sealed record PanelReliability(AlphaEstimate? Ordinal, AlphaEstimate? Interval);

@@ -1,0 +1,52 @@
+namespace Decide.Core.Model;
+
+/// <summary>
+/// The design of a round in which each reviewer reads only some of the applications (an incomplete design, as in
+/// grant rounds): how many reviewers each application gets, the most any reviewer may read, and who reads what.
+/// Fixed with the plan; an evaluation without one is a complete design, in which every assessor rates every bid.
+/// </summary>
+/// <param name="ReviewersPerApplication">k: how many reviewers read each application; 1 or more.</param>
+/// <param name="MaxLoad">The most applications one reviewer may be given; 1 or more.</param>
+/// <param name="Assigned">Per reviewer, the applications they read (the proposal the facilitator accepted or edited).</param>
+public sealed record ReviewDesign(int ReviewersPerApplication, int MaxLoad, IReadOnlyList<ReviewAssignment> Assigned)
+{
+    /// <summary>True when reviewer <paramref name="assessor"/> is assigned application <paramref name="alternative"/>.</summary>
+    public bool IsAssigned(string assessor, string alternative) => Lookup().Contains((assessor, alternative));
+
+    /// <summary>The applications assigned to <paramref name="assessor"/>, in the order given (empty when none).</summary>
+    public IReadOnlyList<string> ApplicationsOf(string assessor) =>
+        Assigned.FirstOrDefault(a => a.Assessor == assessor)?.Alternatives ?? [];
+
+    /// <summary>The reviewers assigned to <paramref name="alternative"/>, in the order of <see cref="Assigned"/>.</summary>
+    public IReadOnlyList<string> ReviewersOf(string alternative) =>
+        Assigned.Where(a => a.Alternatives.Contains(alternative)).Select(a => a.Assessor).ToArray();
+
+    // Keyed by the list itself, not held in a field: a field would take part in the record's equality and be copied
+    // by `with` when the list is replaced.
+    private static readonly System.Runtime.CompilerServices.ConditionalWeakTable<IReadOnlyList<ReviewAssignment>, HashSet<(string, string)>> Lookups = new();
+
+    private HashSet<(string, string)> Lookup() => Lookups.GetValue(Assigned, list => list
+        .SelectMany(a => a.Alternatives.Select(alt => (a.Assessor, alt)))
+        .ToHashSet());
+}
+
+/// <summary>One reviewer's share of a round.</summary>
+/// <param name="Assessor">Assessor id.</param>
+/// <param name="Alternatives">The applications (alternative ids) they read.</param>
+public sealed record ReviewAssignment(string Assessor, IReadOnlyList<string> Alternatives);
+
+/// <summary>How a round's budget is spent down the ranking.</summary>
+public enum FundingRule
+{
+    /// <summary>Fund in rank order and stop at the first application the remaining budget cannot pay for in full.</summary>
+    StopAtFirstUnaffordable,
+
+    /// <summary>Fund in rank order; pass over an application the remaining budget cannot pay for and go on down the list.</summary>
+    SkipUnaffordable,
+}
+
+/// <summary>The funding line of a round: the budget and the rule that spends it down the ranking.</summary>
+/// <param name="Budget">The amount available; positive.</param>
+/// <param name="Rule">How an application the remaining budget cannot pay for is treated.</param>
+/// <param name="Currency">The unit of the budget and of the requested amounts, for display ("EUR").</param>
+public sealed record FundingPlan(double Budget, FundingRule Rule = FundingRule.StopAtFirstUnaffordable, string? Currency = null);
