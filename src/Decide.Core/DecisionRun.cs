@@ -19,7 +19,8 @@ public sealed record DecisionRun(PreparedEvaluation Prepared, AnalysisResult Ana
     public static DecisionRun Of(Evaluation evaluation, RobustnessOptions? robustness = null)
     {
         var prepared = DecisionEngine.Prepare(evaluation);
-        var run = new DecisionRun(prepared, prepared.Analyse(), null);
+        var analysis = prepared.Analyse();
+        var run = new DecisionRun(prepared, analysis, null) { Round = Rounds.RoundAnalysis.Of(prepared, analysis, prepared.Award, null) };
         return robustness is null ? run : run.WithRobustness(robustness);
     }
 
@@ -32,10 +33,21 @@ public sealed record DecisionRun(PreparedEvaluation Prepared, AnalysisResult Ana
     /// <summary>The robustness of the points award (the binding rule the tender published); null when not asked for or when the plan states no award.</summary>
     public Award.AwardRobustnessResult? AwardRobustness { get; init; }
 
+    /// <summary>
+    /// A round's funding line, bands, funding flips and leave-one-reviewer-out, or null when the plan has neither a
+    /// review design nor a funding line; bands and flips are filled once robustness has been run.
+    /// </summary>
+    public Rounds.RoundReport? Round { get; init; }
+
     /// <summary>The same run with its robustness checked (or checked again with other settings), the award's too when the plan states one.</summary>
-    public DecisionRun WithRobustness(RobustnessOptions options) => this with
+    public DecisionRun WithRobustness(RobustnessOptions options)
     {
-        Robustness = RobustnessAnalysis.Run(Prepared, Analysis, options),
-        AwardRobustness = Award is { } award ? Core.Award.AwardRobustness.Run(Prepared.Source, award, options) : null,
-    };
+        var robustness = RobustnessAnalysis.Run(Prepared, Analysis, options);
+        return this with
+        {
+            Robustness = robustness,
+            AwardRobustness = Award is { } award ? Core.Award.AwardRobustness.Run(Prepared.Source, award, options) : null,
+            Round = Rounds.RoundAnalysis.Of(Prepared, Analysis, Prepared.Award, robustness),
+        };
+    }
 }
