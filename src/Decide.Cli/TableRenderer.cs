@@ -87,6 +87,11 @@ public static class TableRenderer
             AwardRenderer.Render(file, award, run.AwardAgreement!, run.AwardRobustness, output);
         }
 
+        if (run.Round is { } round)
+        {
+            RoundRenderer.Render(file, round, robustness?.Agreement, output);
+        }
+
         if (robustness is not null)
         {
             RobustnessRenderer.Render(file, result, robustness, output);

@@ -101,6 +101,12 @@ public static class EvaluationFileWriter
             w.WriteStartObject();
             w.WriteString("id", alternative.Id);
             w.WriteString("name", alternative.Name);
+            if (alternative.Requested is { } requested)
+            {
+                w.WriteNumber("requested", requested);
+            }
+
+            WriteOptional(w, "topic", alternative.Topic);
             w.WriteEndObject();
         }
 
@@ -132,9 +138,44 @@ public static class EvaluationFileWriter
         WriteValues(w, e.Values);
         WriteGates(w, e.Gates);
         AwardWriter.WriteReviews(w, e.LowPriceReviews);
+        WriteRound(w, e.Reviews, e.Funding);
 
         WriteOptions(w, e.Options);
         w.WriteEndObject();
+    }
+
+    /// <summary>The <c>reviews</c> and <c>funding</c> members of a round, when it has them.</summary>
+    private static void WriteRound(Utf8JsonWriter w, ReviewDesign? reviews, FundingPlan? funding)
+    {
+        if (reviews is not null)
+        {
+            w.WriteStartObject("reviews");
+            w.WriteNumber("reviewersPerApplication", reviews.ReviewersPerApplication);
+            w.WriteNumber("maxLoad", reviews.MaxLoad);
+            w.WriteStartObject("assigned");
+            foreach (var reviewer in reviews.Assigned)
+            {
+                w.WriteStartArray(reviewer.Assessor);
+                foreach (var id in reviewer.Alternatives)
+                {
+                    w.WriteStringValue(id);
+                }
+
+                w.WriteEndArray();
+            }
+
+            w.WriteEndObject();
+            w.WriteEndObject();
+        }
+
+        if (funding is not null)
+        {
+            w.WriteStartObject("funding");
+            w.WriteNumber("budget", funding.Budget);
+            w.WriteString("rule", FormatWords.Of(funding.Rule));
+            WriteOptional(w, "currency", funding.Currency);
+            w.WriteEndObject();
+        }
     }
 
     /// <summary>The <c>options</c> member, written in full; the plan writer uses it too.</summary>
@@ -243,6 +284,17 @@ public static class EvaluationFileWriter
             foreach (var id in assigned)
             {
                 w.WriteStringValue(id);
+            }
+
+            w.WriteEndArray();
+        }
+
+        if (a.Topics is { Count: > 0 } topics)
+        {
+            w.WriteStartArray("topics");
+            foreach (var topic in topics)
+            {
+                w.WriteStringValue(topic);
             }
 
             w.WriteEndArray();

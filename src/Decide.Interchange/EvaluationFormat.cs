@@ -19,7 +19,7 @@ public static class EvaluationFormat
     /// results); they are allowed and ignored on read.
     /// </summary>
     public static IReadOnlyList<string> ResultMembers { get; } =
-        ["ranking", "excluded", "weights", "consistency", "matrix", "sensitivity", "agreement", "summary", "engine", "method", "pointsAward"];
+        ["ranking", "excluded", "weights", "consistency", "matrix", "sensitivity", "agreement", "summary", "engine", "method", "pointsAward", "round"];
 
     /// <summary>Range of a custom rating scale that gives none: [0, 10].</summary>
     public static (double Minimum, double Maximum) DefaultRatingRange => (0, 10);

@@ -22,6 +22,10 @@ public static class FormatWords
     public static IReadOnlyList<(string Name, WeightingMethod Value)> Weightings { get; } =
         [("importance", WeightingMethod.Importance), ("pairwise", WeightingMethod.Pairwise), ("points", WeightingMethod.Points)];
 
+    /// <summary>Rules of a round's funding line.</summary>
+    public static IReadOnlyList<(string Name, Decide.Core.Model.FundingRule Value)> FundingRules { get; } =
+        [("stop-at-first-unaffordable", Decide.Core.Model.FundingRule.StopAtFirstUnaffordable), ("skip-unaffordable", Decide.Core.Model.FundingRule.SkipUnaffordable)];
+
     /// <summary>Price formulas of the award.</summary>
     public static IReadOnlyList<(string Name, PriceFormula Value)> PriceFormulas { get; } =
     [
@@ -67,6 +71,9 @@ public static class FormatWords
 
     /// <summary>The file's word for a weighting method.</summary>
     public static string Of(WeightingMethod value) => Word(Weightings, value);
+
+    /// <summary>The file's word for a funding rule.</summary>
+    public static string Of(Decide.Core.Model.FundingRule value) => Word(FundingRules, value);
 
     /// <summary>The file's word for an aggregation rule.</summary>
     public static string Of(AggregationRule value) => Word(Aggregations, value);

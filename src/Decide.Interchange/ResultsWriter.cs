@@ -84,6 +84,7 @@ public static class ResultsWriter
     {
         ArgumentNullException.ThrowIfNull(run);
         var document = CreateDocument(run.Analysis, evaluation, run.Robustness, run.Award is { } report ? (report, run.AwardAgreement!) : null);
+        document = document with { Round = run.Round is { } round ? RobustnessSections.Round(round) : null };
         return run.AwardRobustness is { } checks && document.PointsAward is { } award
             ? document with { PointsAward = award with { Robustness = AwardRobustness(checks) } }
             : document;

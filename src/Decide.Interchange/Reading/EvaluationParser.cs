@@ -25,12 +25,13 @@ internal sealed class EvaluationParser
         "format", "title", "reference", "organisation", "description", "noun", "ratingScale", "importanceScale",
         "pairwiseScale", "groups", "criteria", "alternatives", "assessors", "weighting", "importance", "pairwise",
         "ratings", "moderation", "values", "gates", "options", "publishedWeights", "award", "lowPriceReviews",
+        "reviews", "funding",
     ];
 
     private static readonly string[] GroupMembers = ["id", "name"];
     private static readonly string[] CriterionMembers = ["id", "name", "kind", "direction", "group", "descriptors", "unit", "description"];
-    private static readonly string[] AlternativeMembers = ["id", "name"];
-    private static readonly string[] AssessorMembers = ["id", "name", "weight", "criteria"];
+    private static readonly string[] AlternativeMembers = ["id", "name", "requested", "topic"];
+    private static readonly string[] AssessorMembers = ["id", "name", "weight", "criteria", "topics"];
     private static readonly string[] JudgementMembers = ["row", "col", "tfn", "term"];
     private static readonly string[] RatingMembers = ["term", "rationale", "declined"];
     private static readonly string[] ModeratedMembers = ["term", "reason", "agreedBy"];
@@ -87,7 +88,9 @@ internal sealed class EvaluationParser
         var descriptions = new Dictionary<string, string>(StringComparer.Ordinal);
         var criteria = List(top, "criteria", CriterionMembers, required: true, (f, _) => Criterion(f, descriptions));
         var alternatives = List(top, "alternatives", AlternativeMembers, required: !_planOnly, (f, _) =>
-            f.String("id", "the alternative's id") is { } id ? new Alternative(id, f.String("name", "the alternative's name") ?? "") : null);
+            f.String("id", "the alternative's id") is { } id
+                ? new Alternative(id, f.String("name", "the alternative's name") ?? "", f.Number("requested"), f.String("topic"))
+                : null);
         var assessors = List(top, "assessors", AssessorMembers, required: !_planOnly, Assessor);
 
         var weighting = top.Choice("weighting", FormatWords.Weightings, WeightingMethod.Importance, out var weightingReadable);
@@ -99,6 +102,7 @@ internal sealed class EvaluationParser
         }
 
         var award = new AwardReader(_in);
+        var round = new RoundReader(_in, _paths);
         var evaluation = new Evaluation
         {
             Title = title,
@@ -120,6 +124,8 @@ internal sealed class EvaluationParser
             Points = award.Points(top, criteria),
             Award = award.Method(top),
             LowPriceReviews = award.Reviews(top),
+            Reviews = round.Reviews(top),
+            Funding = round.Funding(top),
         };
 
         var errors = new List<EvaluationError>(_in.Errors);
@@ -250,7 +256,20 @@ internal sealed class EvaluationParser
             _paths.Map(JsonPath.Key(JsonPath.Index("$.assessors", modelIndex), "criteria"), fileIndex);
         }
 
-        return new Assessor(id, name, weight, assigned);
+        List<string>? topics = null;
+        if (f.TryGet("topics", out var topicList))
+        {
+            topics = [];
+            foreach (var (_, item, at) in _in.Items(topicList.Value, topicList.Path))
+            {
+                if (_in.String(item, at) is { } topic)
+                {
+                    topics.Add(topic);
+                }
+            }
+        }
+
+        return new Assessor(id, name, weight, assigned, topics);
     }
 
     private List<ImportanceRating> Importance(JsonFields top)

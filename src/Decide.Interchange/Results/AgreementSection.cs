@@ -14,6 +14,8 @@ namespace Decide.Interchange.Results;
 /// <param name="Tolerance">The largest spread of a cell's terms, in scale steps, not listed for discussion.</param>
 /// <param name="Cells">The cells for discussion: spread above the tolerance, largest first.</param>
 /// <param name="Assessors">Every assessor who rated a linguistic cell, in panel order.</param>
+/// <param name="Alpha">Krippendorff's alpha (ordinal on the terms' order, interval on their centres), valid with missing cells; empty when no cell has two ratings.</param>
+/// <param name="OutsideConcordance">Assessors left out of Kendall's W because they did not rate every alternative in the running.</param>
 public sealed record AgreementSection(
     [property: JsonIgnore(Condition = JsonIgnoreCondition.Never)] double? KendallW,
     [property: JsonIgnore(Condition = JsonIgnoreCondition.Never)] double? ChiSquare,
@@ -21,4 +23,6 @@ public sealed record AgreementSection(
     [property: JsonIgnore(Condition = JsonIgnoreCondition.Never)] int? DegreesOfFreedom,
     int Tolerance,
     IReadOnlyList<CellSpreadEntry> Cells,
-    IReadOnlyList<AssessorAgreementEntry> Assessors);
+    IReadOnlyList<AssessorAgreementEntry> Assessors,
+    IReadOnlyList<AlphaEntry>? Alpha = null,
+    IReadOnlyList<string>? OutsideConcordance = null);

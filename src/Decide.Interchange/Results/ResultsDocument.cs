@@ -42,6 +42,9 @@ public sealed record ResultsDocument
     /// <summary>The published points award applied, with the table a bidder can recompute; null when the plan states no award method.</summary>
     public AwardSection? PointsAward { get; init; }
 
+    /// <summary>A round's funding line, bands and flips; null when the evaluation has neither a review design nor a funding line.</summary>
+    public RoundSection? Round { get; init; }
+
     /// <summary>How the ranking responds to changes of weights, ratings, panel, bid set and method; null when robustness was not run.</summary>
     public SensitivitySection? Sensitivity { get; init; }
 

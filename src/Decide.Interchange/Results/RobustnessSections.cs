@@ -42,8 +42,21 @@ internal static class RobustnessSections
             a.Assessors.Select(x => new AssessorAgreementEntry(
                 x.Assessor, x.Ranking.ToArray(),
                 Map(x.Closeness.Select(c => c.Alternative), x.Closeness.Select(c => c.Closeness)),
-                x.CellsRated, x.MeanDistance, x.TauWithPanel)).ToArray());
+                x.CellsRated, x.MeanDistance, x.TauWithPanel)).ToArray(),
+            new[] { a.Reliability?.Ordinal, a.Reliability?.Interval }.OfType<AlphaEstimate>()
+                .Select(x => new AlphaEntry(x.Metric.ToString().ToLowerInvariant(), x.Alpha, x.Low, x.High, x.Units, x.PairableValues, x.Draws)).ToArray(),
+            a.OutsideConcordance?.ToArray() ?? []);
     }
+
+    public static RoundSection Round(Decide.Core.Rounds.RoundReport r) => new(
+        r.Order.ToArray(),
+        r.Funding is { } f
+            ? new FundingEntry(f.Plan.Budget, FormatWords.Of(f.Plan.Rule), f.Plan.Currency, f.Spent, f.Line, f.TiedAcrossTheLine.ToArray(),
+                f.Decisions.Select(d => new FundingDecisionEntry(d.Alternative, d.Position, d.Requested, d.Funded, d.RemainingAfter, d.PassedOver)).ToArray())
+            : null,
+        r.Bands.Select(b => new BandEntry(b.Number, b.Alternatives.ToArray(), b.Best, b.Worst)).ToArray(),
+        r.Flips.Select(x => new FundingFlipEntry(x.Alternative, x.FundedNow, x.Because.ToArray())).ToArray(),
+        r.Reviewers.Select(x => new ReviewerEffectEntry(x.Assessor, x.Read, x.LargestMove, x.From, x.To, x.Problem)).ToArray());
 
     private static CriticalChangesEntry CriticalChanges(CriticalChangesResult c) => new(
         c.Changes.Select(x => new CriticalChangeEntry(

@@ -1,0 +1,87 @@
+using System.Globalization;
+using Decide.Core.Robustness;
+using Decide.Core.Rounds;
+using Decide.Interchange;
+
+namespace Decide.Cli;
+
+/// <summary>
+/// Prints what a round adds: the funding line down the ranking, the bands the draws cannot put in order, the
+/// applications whose funding a check changes, what leaving each reviewer out does, and Krippendorff's alpha.
+/// </summary>
+internal static class RoundRenderer
+{
+    public static void Render(EvaluationFile file, RoundReport round, PanelAgreementResult? agreement, TextWriter output)
+    {
+        var e = file.Evaluation;
+        var names = e.Alternatives.GroupBy(a => a.Id).ToDictionary(g => g.Key, g => g.First().Name);
+        string Name(string id) => names.GetValueOrDefault(id, id);
+        var band = round.Bands.SelectMany(b => b.Alternatives.Select(id => (id, b.Number))).ToDictionary(x => x.id, x => x.Number);
+        var intervals = round.Intervals.ToDictionary(i => i.Alternative);
+
+        output.WriteLine();
+        output.WriteLine(e.Reviews is { } design
+            ? $"Round: {e.Alternatives.Count} applications, {design.ReviewersPerApplication} reviewers each, at most {design.MaxLoad} per reviewer"
+            : "Round");
+        if (round.Funding is { } funding)
+        {
+            var unit = funding.Plan.Currency is { } c ? $" {c}" : "";
+            output.WriteLine($"  Funding line: budget {Money(funding.Plan.Budget)}{unit}, {FundingRuleWords(funding.Plan.Rule)}; {funding.Funded.Count()} funded, {Money(funding.Spent)}{unit} spent.");
+            if (funding.TiedAcrossTheLine.Count > 0)
+            {
+                output.WriteLine($"  The line falls inside a tie: {string.Join(", ", funding.TiedAcrossTheLine.Select(Name))} have the same score; the panel must break it.");
+            }
+        }
+
+        var table = new TextTable("Place", "Id", "Name", "Band", "Ranks (95%)", "Requested", "Funded").AlignRight(0, 3, 5);
+        foreach (var (id, i) in round.Order.Select((id, i) => (id, i)))
+        {
+            var decision = round.Funding?.Decisions.FirstOrDefault(d => d.Alternative == id);
+            table.Add(
+                (i + 1).ToString(CultureInfo.InvariantCulture),
+                id,
+                Name(id),
+                band.TryGetValue(id, out var b) ? b.ToString(CultureInfo.InvariantCulture) : "–",
+                intervals.TryGetValue(id, out var interval) ? $"{interval.Best}–{interval.Worst}" : "–",
+                decision is null ? "–" : Money(decision.Requested),
+                decision is null ? "–" : decision.Funded ? "yes" : decision.PassedOver ? "passed over" : "no");
+        }
+
+        table.Write(output, "  ");
+        if (round.Bands.Count > 0)
+        {
+            output.WriteLine("  Band: applications whose 95% rank intervals overlap the first of the band's; the draws cannot put them in order.");
+        }
+
+        foreach (var flip in round.Flips)
+        {
+            output.WriteLine($"  {Name(flip.Alternative)} is {(flip.FundedNow ? "funded" : "not funded")}, but {string.Join("; and ", flip.Because)}.");
+        }
+
+        foreach (var effect in round.Reviewers.Where(x => x.LargestMove is not null && x.From != x.To))
+        {
+            var who = e.Assessors.FirstOrDefault(a => a.Id == effect.Assessor)?.Name ?? effect.Assessor;
+            output.WriteLine($"  Without {who} (who rated {effect.Read}), {Name(effect.LargestMove!)} moves from place {effect.From} to {effect.To}.");
+        }
+
+        if (agreement?.Reliability is { } reliability)
+        {
+            foreach (var alpha in new[] { reliability.Ordinal, reliability.Interval }.OfType<AlphaEstimate>())
+            {
+                output.WriteLine(string.Create(CultureInfo.InvariantCulture,
+                    $"  Krippendorff's alpha ({alpha.Metric.ToString().ToLowerInvariant()}): {alpha.Alpha:0.000} (95% bootstrap {alpha.Low:0.000} to {alpha.High:0.000}; {alpha.Units} cells rated by two or more)."));
+            }
+        }
+
+        if (agreement?.OutsideConcordance is { Count: > 0 } outside)
+        {
+            output.WriteLine($"  Kendall's W leaves out {outside.Count} {(outside.Count == 1 ? "assessor" : "assessors")} who did not rate every application: W needs complete rankings.");
+        }
+    }
+
+    internal static string FundingRuleWords(Decide.Core.Model.FundingRule rule) => rule == Decide.Core.Model.FundingRule.StopAtFirstUnaffordable
+        ? "funded down the ranking until the first application the remaining budget cannot pay in full"
+        : "funded down the ranking, passing over any application the remaining budget cannot pay in full";
+
+    private static string Money(double amount) => amount.ToString("#,0.##", CultureInfo.InvariantCulture);
+}
