@@ -29,6 +29,7 @@ internal sealed class PanelMemberConfiguration : IEntityTypeConfiguration<PanelM
         e.Property(x => x.Role).HasConversion<string>().HasMaxLength(20);
         e.Property(x => x.Version).IsConcurrencyToken();
         e.HasOne(x => x.User).WithMany().HasForeignKey(x => x.UserId);
+        e.Property(x => x.TopicsJson).HasMaxLength(4_000);
         e.HasIndex(x => new { x.EvaluationId, x.UserId, x.Role }).IsUnique();
         e.HasIndex(x => new { x.EvaluationId, x.AssessorCode });
     }
@@ -39,6 +40,7 @@ internal sealed class StoredAlternativeConfiguration : IEntityTypeConfiguration<
     public void Configure(EntityTypeBuilder<StoredAlternative> e)
     {
         e.ToTable("alternatives");
+        e.Property(x => x.Topic).HasMaxLength(200);
         e.HasIndex(x => new { x.EvaluationId, x.Code }).IsUnique();
     }
 }
@@ -113,6 +115,17 @@ internal sealed class LowPriceReviewConfiguration : IEntityTypeConfiguration<Low
         e.Property(x => x.Reasons).HasMaxLength(8_000);
         e.Property(x => x.Decision).HasMaxLength(16);
         e.HasIndex(x => new { x.EvaluationId, x.AlternativeCode }).IsUnique();
+    }
+}
+
+internal sealed class ReviewAssignmentConfiguration : IEntityTypeConfiguration<ReviewAssignmentEntry>
+{
+    public void Configure(EntityTypeBuilder<ReviewAssignmentEntry> e)
+    {
+        e.ToTable("review_assignments");
+        e.Property(x => x.Source).HasMaxLength(16);
+        e.HasIndex(x => new { x.EvaluationId, x.AssessorCode, x.AlternativeCode }).IsUnique();
+        e.HasIndex(x => new { x.EvaluationId, x.AlternativeCode });
     }
 }
 

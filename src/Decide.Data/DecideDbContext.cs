@@ -41,6 +41,8 @@ public sealed class DecideDbContext(DbContextOptions<DecideDbContext> options)
     /// <summary>Reviews of prices flagged as abnormally low.</summary>
     public DbSet<LowPriceReviewEntry> LowPriceReviews => Set<LowPriceReviewEntry>();
 
+    public DbSet<ReviewAssignmentEntry> ReviewAssignments => Set<ReviewAssignmentEntry>();
+
     public DbSet<Approval> Approvals => Set<Approval>();
 
     public DbSet<AuditEntry> Audit => Set<AuditEntry>();

@@ -13,6 +13,7 @@ public sealed record EvaluationFile(Evaluation Evaluation, EvaluationMetadata Me
         Evaluation = Evaluation with
         {
             Alternatives = [], Assessors = [], Importance = [], Pairwise = [], Ratings = [], Values = [], Gates = [], Moderated = [], LowPriceReviews = [],
+            Reviews = Evaluation.Reviews is { } design ? design with { Assigned = [] } : null,
         },
     };
 }

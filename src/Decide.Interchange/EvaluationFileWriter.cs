@@ -145,7 +145,7 @@ public static class EvaluationFileWriter
     }
 
     /// <summary>The <c>reviews</c> and <c>funding</c> members of a round, when it has them.</summary>
-    private static void WriteRound(Utf8JsonWriter w, ReviewDesign? reviews, FundingPlan? funding)
+    internal static void WriteRound(Utf8JsonWriter w, ReviewDesign? reviews, FundingPlan? funding)
     {
         if (reviews is not null)
         {

@@ -557,6 +557,10 @@ namespace Decide.Data.Postgres.Migrations
                     b.Property<DateTimeOffset?>("SubmittedAt")
                         .HasColumnType("timestamp with time zone");
 
+                    b.Property<string>("TopicsJson")
+                        .HasMaxLength(4000)
+                        .HasColumnType("character varying(4000)");
+
                     b.Property<string>("UserId")
                         .IsRequired()
                         .HasMaxLength(4000)
@@ -637,6 +641,50 @@ namespace Decide.Data.Postgres.Migrations
                     b.ToTable("ratings", (string)null);
                 });
 
+            modelBuilder.Entity("Decide.Data.Entities.ReviewAssignmentEntry", b =>
+                {
+                    b.Property<long>("Id")
+                        .ValueGeneratedOnAdd()
+                        .HasColumnType("bigint");
+
+                    NpgsqlPropertyBuilderExtensions.UseIdentityByDefaultColumn(b.Property<long>("Id"));
+
+                    b.Property<string>("AlternativeCode")
+                        .IsRequired()
+                        .HasMaxLength(4000)
+                        .HasColumnType("character varying(4000)");
+
+                    b.Property<string>("AssessorCode")
+                        .IsRequired()
+                        .HasMaxLength(4000)
+                        .HasColumnType("character varying(4000)");
+
+                    b.Property<DateTimeOffset>("AssignedAt")
+                        .HasColumnType("timestamp with time zone");
+
+                    b.Property<string>("AssignedBy")
+                        .IsRequired()
+                        .HasMaxLength(4000)
+                        .HasColumnType("character varying(4000)");
+
+                    b.Property<Guid>("EvaluationId")
+                        .HasColumnType("uuid");
+
+                    b.Property<string>("Source")
+                        .IsRequired()
+                        .HasMaxLength(16)
+                        .HasColumnType("character varying(16)");
+
+                    b.HasKey("Id");
+
+                    b.HasIndex("EvaluationId", "AlternativeCode");
+
+                    b.HasIndex("EvaluationId", "AssessorCode", "AlternativeCode")
+                        .IsUnique();
+
+                    b.ToTable("review_assignments", (string)null);
+                });
+
             modelBuilder.Entity("Decide.Data.Entities.StoredAlternative", b =>
                 {
                     b.Property<long>("Id")
@@ -663,6 +711,13 @@ namespace Decide.Data.Postgres.Migrations
 
                     b.Property<int>("Position")
                         .HasColumnType("integer");
+
+                    b.Property<double?>("RequestedAmount")
+                        .HasColumnType("double precision");
+
+                    b.Property<string>("Topic")
+                        .HasMaxLength(200)
+                        .HasColumnType("character varying(200)");
 
                     b.HasKey("Id");
 

@@ -536,6 +536,10 @@ namespace Decide.Data.Sqlite.Migrations
                     b.Property<DateTimeOffset?>("SubmittedAt")
                         .HasColumnType("TEXT");
 
+                    b.Property<string>("TopicsJson")
+                        .HasMaxLength(4000)
+                        .HasColumnType("TEXT");
+
                     b.Property<string>("UserId")
                         .IsRequired()
                         .HasMaxLength(4000)
@@ -614,6 +618,48 @@ namespace Decide.Data.Sqlite.Migrations
                     b.ToTable("ratings", (string)null);
                 });
 
+            modelBuilder.Entity("Decide.Data.Entities.ReviewAssignmentEntry", b =>
+                {
+                    b.Property<long>("Id")
+                        .ValueGeneratedOnAdd()
+                        .HasColumnType("INTEGER");
+
+                    b.Property<string>("AlternativeCode")
+                        .IsRequired()
+                        .HasMaxLength(4000)
+                        .HasColumnType("TEXT");
+
+                    b.Property<string>("AssessorCode")
+                        .IsRequired()
+                        .HasMaxLength(4000)
+                        .HasColumnType("TEXT");
+
+                    b.Property<DateTimeOffset>("AssignedAt")
+                        .HasColumnType("TEXT");
+
+                    b.Property<string>("AssignedBy")
+                        .IsRequired()
+                        .HasMaxLength(4000)
+                        .HasColumnType("TEXT");
+
+                    b.Property<Guid>("EvaluationId")
+                        .HasColumnType("TEXT");
+
+                    b.Property<string>("Source")
+                        .IsRequired()
+                        .HasMaxLength(16)
+                        .HasColumnType("TEXT");
+
+                    b.HasKey("Id");
+
+                    b.HasIndex("EvaluationId", "AlternativeCode");
+
+                    b.HasIndex("EvaluationId", "AssessorCode", "AlternativeCode")
+                        .IsUnique();
+
+                    b.ToTable("review_assignments", (string)null);
+                });
+
             modelBuilder.Entity("Decide.Data.Entities.StoredAlternative", b =>
                 {
                     b.Property<long>("Id")
@@ -638,6 +684,13 @@ namespace Decide.Data.Sqlite.Migrations
 
                     b.Property<int>("Position")
                         .HasColumnType("INTEGER");
+
+                    b.Property<double?>("RequestedAmount")
+                        .HasColumnType("REAL");
+
+                    b.Property<string>("Topic")
+                        .HasMaxLength(200)
+                        .HasColumnType("TEXT");
 
                     b.HasKey("Id");
 

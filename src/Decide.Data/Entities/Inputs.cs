@@ -203,3 +203,25 @@ public sealed class Approval
 
     public DateTimeOffset ApprovedAt { get; set; }
 }
+
+/// <summary>
+/// One review of a round: a reviewer (by assessor code) reads one application. Proposed by Decide or edited by the
+/// facilitator before the plan is locked, frozen with it, and audited.
+/// </summary>
+public sealed class ReviewAssignmentEntry
+{
+    public long Id { get; set; }
+
+    public Guid EvaluationId { get; set; }
+
+    public string AssessorCode { get; set; } = "";
+
+    public string AlternativeCode { get; set; } = "";
+
+    /// <summary><c>proposed</c>, <c>edited</c> or <c>imported</c>: how the review came to be assigned.</summary>
+    public string Source { get; set; } = "";
+
+    public string AssignedBy { get; set; } = "";
+
+    public DateTimeOffset AssignedAt { get; set; }
+}

@@ -22,6 +22,9 @@ public sealed class PanelMember : IVersioned
     /// <summary>JSON array of the criterion ids assigned to an assessor; null = every linguistic criterion.</summary>
     public string? AssignedCriteriaJson { get; set; }
 
+    /// <summary>JSON array of the fields a reviewer knows (preferred when applications are assigned); null for none.</summary>
+    public string? TopicsJson { get; set; }
+
     /// <summary>When they signed the conflict-of-interest and confidentiality declaration.</summary>
     public DateTimeOffset? DeclarationSignedAt { get; set; }
 

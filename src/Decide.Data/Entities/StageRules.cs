@@ -52,6 +52,21 @@ public static class StageRules
     /// <summary>Late bids may still be registered after the plan is locked, until scoring opens.</summary>
     public static readonly StageRule ChangeBids = new("change the list of bids", Setup, PlanLocked);
 
+    /// <summary>
+    /// In a round, who reads which application is proposed and edited while the bids may still change and is frozen
+    /// when scoring opens.
+    /// </summary>
+    public static readonly StageRule ChangeAssignment = new("change who reviews which application (it is frozen when scoring opens)", Setup, PlanLocked);
+
+    /// <summary>
+    /// In a round, reviewers confirm their declaration against the applicants' names and declare conflicts before
+    /// scoring, so that the assignment can keep them off what they are conflicted with.
+    /// </summary>
+    public static readonly StageRule ConfirmDeclarationInRound = new("confirm the declaration against the applicants' names", PlanLocked, Scoring, Moderation);
+
+    /// <summary>In a round, conflicts may be declared from the moment the applicants are known.</summary>
+    public static readonly StageRule DeclareConflictInRound = new("declare a conflict of interest", PlanLocked, Scoring, Moderation);
+
     /// <summary>Weight judgements are frozen with the plan.</summary>
     public static readonly StageRule ChangeWeights = new("change weight judgements (they are frozen with the plan)", Setup);
 

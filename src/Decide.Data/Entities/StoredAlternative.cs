@@ -12,6 +12,12 @@ public sealed class StoredAlternative
 
     public string Name { get; set; } = "";
 
+    /// <summary>The amount an application requests (rounds with a funding line), or null.</summary>
+    public double? RequestedAmount { get; set; }
+
+    /// <summary>The application's field, matched with reviewers' topics when assigning; or null.</summary>
+    public string? Topic { get; set; }
+
     /// <summary>Display order.</summary>
     public int Position { get; set; }
 

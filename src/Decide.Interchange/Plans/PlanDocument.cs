@@ -57,6 +57,16 @@ public sealed record PlanDocument
     /// <summary>The analysis options.</summary>
     public AnalysisOptions Options { get; init; } = new();
 
+    /// <summary>
+    /// A round's design settings (reviewers per application, the most one reviewer may read), or null when every
+    /// assessor rates every bid. Who reads what is not part of the plan document: it is proposed and frozen with the
+    /// plan in the service, and written under <c>reviews.assigned</c> in a whole evaluation file.
+    /// </summary>
+    public ReviewDesign? Reviews { get; init; }
+
+    /// <summary>A round's funding line, or null.</summary>
+    public FundingPlan? Funding { get; init; }
+
     /// <summary>The plan a new evaluation starts from: its title, reference and organisation, Chen's scales, no criteria yet.</summary>
     public static PlanDocument Starter(string title, string? reference, string? organisation) =>
         new() { Title = title.Trim(), Reference = reference?.Trim(), Organisation = organisation?.Trim() };

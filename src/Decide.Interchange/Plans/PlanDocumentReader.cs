@@ -17,6 +17,7 @@ public static class PlanDocumentReader
         var defaults = new PlanDocument();
         var criteria = Items(plan, "criteria").Select(Criterion).ToArray();
         var (points, award) = Award(plan, criteria);
+        var (reviews, funding) = Round(plan);
         var options = plan.ValueKind == JsonValueKind.Object && plan.TryGetProperty("options", out var o) && o.ValueKind == JsonValueKind.Object ? o : default;
         return new PlanDocument
         {
@@ -33,6 +34,8 @@ public static class PlanDocumentReader
             Weighting = FormatWords.Parse(FormatWords.Weightings, Text(plan, "weighting"), defaults.Weighting),
             Points = points,
             Award = award,
+            Reviews = reviews,
+            Funding = funding,
             Options = new AnalysisOptions(
                 FormatWords.Parse(FormatWords.Aggregations, Text(options, "aggregation"), defaults.Options.Aggregation),
                 FormatWords.Parse(FormatWords.Ideals, Text(options, "ideal"), defaults.Options.Ideal),
@@ -64,6 +67,25 @@ public static class PlanDocumentReader
         var reader = new Reading.AwardReader(context);
         var model = criteria.Select(c => new Criterion(c.Id, c.Name, c.Kind, c.Direction, c.Group)).ToArray();
         return (reader.Points(top, model), reader.Method(top));
+    }
+
+    private static (ReviewDesign?, FundingPlan?) Round(JsonElement plan)
+    {
+        if (plan.ValueKind != JsonValueKind.Object)
+        {
+            return (null, null);
+        }
+
+        var context = new Reading.ReadContext();
+        var top = context.Fields(plan, Decide.Core.JsonPath.Root, ["reviews", "funding"], plan.EnumerateObject().Select(p => p.Name).ToArray());
+        if (top is null)
+        {
+            return (null, null);
+        }
+
+        var reader = new Reading.RoundReader(context, new Reading.PathTranslator());
+        var reviews = reader.Reviews(top);
+        return (reviews is null ? null : reviews with { Assigned = [] }, reader.Funding(top));
     }
 
     private static PlanCriterion Criterion(JsonElement c)

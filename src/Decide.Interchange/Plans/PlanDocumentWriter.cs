@@ -77,6 +77,7 @@ public static class PlanDocumentWriter
             AwardWriter.WriteMethod(w, award);
         }
 
+        EvaluationFileWriter.WriteRound(w, plan.Reviews is { } reviews ? reviews with { Assigned = [] } : null, plan.Funding);
         EvaluationFileWriter.WriteOptions(w, plan.Options);
         w.WriteEndObject();
     }

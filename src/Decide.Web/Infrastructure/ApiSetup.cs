@@ -67,6 +67,7 @@ public static class ApiSetup
         services.AddScoped<ModerationService>();
         services.AddScoped<ResultsService>();
         services.AddScoped<AwardService>();
+        services.AddScoped<Features.Rounds.AssignmentService>();
         services.AddScoped<AnalysisService>();
         services.AddScoped<ExchangeService>();
         services.AddScoped<SignOffService>();
@@ -96,6 +97,7 @@ public static class ApiSetup
         api.MapModerationEndpoints();
         api.MapResultsEndpoints();
         api.MapAwardEndpoints();
+        api.MapRoundEndpoints();
         api.MapExchangeEndpoints();
         api.MapAnalysisEndpoints();
         api.MapSignOffEndpoints();

@@ -76,6 +76,10 @@ public sealed class AuthorisationMatrixTests(AuthorisationFixture fixture) : ICl
         ["POST /api/evaluations/{id:guid}/sheets/{assessorCode}/reopen"] = "1433A333",
         ["GET /api/evaluations/{id:guid}/results"] = "14AAAAA3",
         ["GET /api/evaluations/{id:guid}/award"] = "14AAAAA3",
+        // The demo is not a round: callers who may read an assignment get a 409 saying so; an assessor would see only their own list.
+        ["GET /api/evaluations/{id:guid}/assignment/"] = "14AAAAA3",
+        ["POST /api/evaluations/{id:guid}/assignment/propose"] = "1433A333",
+        ["PUT /api/evaluations/{id:guid}/assignment/{reviewer}"] = "1433A333",
         ["PUT /api/evaluations/{id:guid}/low-price-reviews/{bid}"] = "1433A333",
 
         ["GET /api/evaluations/{id:guid}/export"] = "1433AAA3",

@@ -25,6 +25,7 @@ public sealed class ScenarioBuilder(IDecideHost factory)
     private bool _twoStage;
     private bool _pricesVisible;
     private int _minRationale = 20;
+    private (int K, int MaxLoad, double Budget)? _round;
 
     /// <summary>Weights by pairwise comparison instead of importance terms.</summary>
     public ScenarioBuilder WithPairwiseWeighting()
@@ -47,6 +48,17 @@ public sealed class ScenarioBuilder(IDecideHost factory)
     public ScenarioBuilder WithPricesVisibleToAssessors()
     {
         _pricesVisible = true;
+        return this;
+    }
+
+    /// <summary>
+    /// Makes the evaluation a round: each bid read by <paramref name="k"/> reviewers, at most
+    /// <paramref name="maxLoad"/> per reviewer, a funding line of <paramref name="budget"/>; the bids request
+    /// 40,000, 30,000 and 20,000.
+    /// </summary>
+    public ScenarioBuilder WithRound(int k, int maxLoad, double budget)
+    {
+        _round = (k, maxLoad, budget);
         return this;
     }
 
@@ -87,9 +99,16 @@ public sealed class ScenarioBuilder(IDecideHost factory)
             _weighting);
 
         var f = scenario.Facilitator;
+        object plan = ScenarioPlan.Plan(reference, _weighting, _twoStage);
+        if (_round is { } round && plan is Dictionary<string, object?> members)
+        {
+            members["reviews"] = new { reviewersPerApplication = round.K, maxLoad = round.MaxLoad, assigned = new { } };
+            members["funding"] = new { budget = round.Budget, rule = "stop-at-first-unaffordable", currency = "EUR" };
+        }
+
         await ApiAssert.OkAsync(await f.PutJsonAsync(scenario.Url("/plan"), new
         {
-            plan = ScenarioPlan.Plan(reference, _weighting, _twoStage),
+            plan,
             settings = new { minRationaleLength = _minRationale, pricesVisibleToAssessors = _pricesVisible, requiredApprovals = 1 },
             version = await scenario.VersionAsync(),
         }));
@@ -106,7 +125,7 @@ public sealed class ScenarioBuilder(IDecideHost factory)
         }));
         await ApiAssert.OkAsync(await f.PutJsonAsync(scenario.Url("/bids"), new
         {
-            bids = ScenarioPlan.Bidders.Select(b => new { code = b.Code, name = b.Name }).ToArray(),
+            bids = ScenarioPlan.Bidders.Select((b, i) => new { code = b.Code, name = b.Name, requested = _round is null ? (double?)null : 40_000 - (10_000 * i) }).ToArray(),
             version = await scenario.VersionAsync(),
         }));
 

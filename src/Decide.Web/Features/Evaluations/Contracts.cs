@@ -39,8 +39,11 @@ public sealed record StageDates(
 public sealed record PanelSeat(string UserId, string DisplayName, PanelRole Role, string? AssessorCode, double Weight,
     IReadOnlyList<string>? Criteria, bool DeclarationSigned, bool Submitted);
 
-/// <summary>A bid: the bidder's code on this evaluation and the bidder's name (the engine and the file call it an alternative).</summary>
-public sealed record BidView(string Code, string Name);
+/// <summary>
+/// A bid: the bidder's code on this evaluation and the bidder's name (the engine and the file call it an
+/// alternative); in a round, also the amount an application requests and its field.
+/// </summary>
+public sealed record BidView(string Code, string Name, double? Requested = null, string? Topic = null);
 
 /// <summary>Replace the plan (setup only). <paramref name="Plan"/> is a decide-evaluation/1 document without panel, bids or inputs.</summary>
 public sealed record UpdatePlanRequest(JsonElement Plan, EvaluationSettings? Settings, long Version);
@@ -48,8 +51,8 @@ public sealed record UpdatePlanRequest(JsonElement Plan, EvaluationSettings? Set
 /// <summary>Replace the panel's assessors, price evaluators, observers and approvers (setup only). Facilitators stay.</summary>
 public sealed record UpdatePanelRequest(IReadOnlyList<SeatRequest> Seats, long Version);
 
-/// <summary>One seat: the account by e-mail, the role, and for assessors their code, weight and assigned criteria.</summary>
-public sealed record SeatRequest(string Email, PanelRole Role, string? AssessorCode, double? Weight, IReadOnlyList<string>? Criteria);
+/// <summary>One seat: the account by e-mail, the role, and for assessors their code, weight, assigned criteria and (in a round) the fields they know.</summary>
+public sealed record SeatRequest(string Email, PanelRole Role, string? AssessorCode, double? Weight, IReadOnlyList<string>? Criteria, IReadOnlyList<string>? Topics = null);
 
 /// <summary>Replace the list of bids (setup or plan locked).</summary>
 public sealed record UpdateBidsRequest(IReadOnlyList<BidView> Bids, long Version);

@@ -30,7 +30,7 @@ public sealed class EvaluationComposer
 
         var seats = await db.PanelMembers.AsNoTracking().Include(p => p.User)
             .Where(p => p.EvaluationId == id && p.Role == PanelRole.Assessor).OrderBy(p => p.Id).ToListAsync(ct);
-        var assessors = seats.Select(s => new Assessor(s.AssessorCode!, s.User?.DisplayName ?? s.AssessorCode!, s.Weight, Assigned(s))).ToArray();
+        var assessors = seats.Select(s => new Assessor(s.AssessorCode!, s.User?.DisplayName ?? s.AssessorCode!, s.Weight, Assigned(s), Topics(s))).ToArray();
         var assessorOrder = assessors.Select((a, i) => (a.Id, i)).ToDictionary(x => x.Id, x => x.i, StringComparer.Ordinal);
 
         var alternatives = await db.Alternatives.AsNoTracking().Where(a => a.EvaluationId == id)
@@ -43,6 +43,9 @@ public sealed class EvaluationComposer
         var gates = await db.GateResults.AsNoTracking().Where(g => g.EvaluationId == id).ToListAsync(ct);
         var moderation = await db.Moderation.AsNoTracking().Where(m => m.EvaluationId == id).OrderBy(m => m.Id).ToListAsync(ct);
         var reviews = await db.LowPriceReviews.AsNoTracking().Where(r => r.EvaluationId == id).ToListAsync(ct);
+        var assigned = plan.Evaluation.Reviews is null
+            ? []
+            : await db.ReviewAssignments.AsNoTracking().Where(r => r.EvaluationId == id).ToListAsync(ct);
 
         int A(string code) => assessorOrder.GetValueOrDefault(code, int.MaxValue);
         int B(string code) => alternativeOrder.GetValueOrDefault(code, int.MaxValue);
@@ -50,7 +53,14 @@ public sealed class EvaluationComposer
 
         var evaluation = plan.Evaluation with
         {
-            Alternatives = alternatives.Select(a => new Alternative(a.Code, a.Name)).ToArray(),
+            Alternatives = alternatives.Select(a => new Alternative(a.Code, a.Name, a.RequestedAmount, a.Topic)).ToArray(),
+            Reviews = plan.Evaluation.Reviews is { } design
+                ? design with
+                {
+                    Assigned = assessors.Select(a => new ReviewAssignment(a.Id, assigned.Where(r => r.AssessorCode == a.Id)
+                        .OrderBy(r => B(r.AlternativeCode)).Select(r => r.AlternativeCode).ToArray())).Where(r => r.Alternatives.Count > 0).ToArray(),
+                }
+                : null,
             Assessors = assessors,
             Importance = judgements.Where(j => j.Kind == WeightJudgement.ImportanceKind)
                 .OrderBy(j => A(j.AssessorCode)).ThenBy(j => WeightStructure.NodeOrder(plan.Evaluation, j.Node))
@@ -74,6 +84,10 @@ public sealed class EvaluationComposer
         };
         return plan with { Evaluation = evaluation };
     }
+
+    /// <summary>The fields a reviewer knows, or null.</summary>
+    public static IReadOnlyList<string>? Topics(PanelMember seat) =>
+        seat.TopicsJson is null ? null : JsonSerializer.Deserialize<string[]>(seat.TopicsJson);
 
     /// <summary>The criteria assigned to a seat, or null for all linguistic criteria.</summary>
     public static IReadOnlyList<string>? Assigned(PanelMember seat) =>

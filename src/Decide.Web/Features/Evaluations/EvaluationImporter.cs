@@ -45,10 +45,22 @@ public static class EvaluationImporter
                 AssessorCode = assessor.Id,
                 Weight = assessor.Weight,
                 AssignedCriteriaJson = assessor.Criteria is null ? null : JsonSerializer.Serialize(assessor.Criteria),
+                TopicsJson = assessor.Topics is { Count: > 0 } topics ? JsonSerializer.Serialize(topics) : null,
             });
         }
 
-        stored.Alternatives.AddRange(e.Alternatives.Select((a, i) => new StoredAlternative { Code = a.Id, Name = a.Name, Position = i, AddedAt = now }));
+        stored.Alternatives.AddRange(e.Alternatives.Select((a, i) => new StoredAlternative
+        {
+            Code = a.Id, Name = a.Name, Position = i, AddedAt = now, RequestedAmount = a.Requested, Topic = a.Topic,
+        }));
+        if (e.Reviews is { } design)
+        {
+            db.ReviewAssignments.AddRange(design.Assigned.SelectMany(r => r.Alternatives.Select(alt => new ReviewAssignmentEntry
+            {
+                EvaluationId = stored.Id, AssessorCode = r.Assessor, AlternativeCode = alt, Source = "imported", AssignedBy = createdBy, AssignedAt = now,
+            })));
+        }
+
         db.Evaluations.Add(stored);
         db.WeightJudgements.AddRange(e.Importance.Select(r => new WeightJudgement
         {

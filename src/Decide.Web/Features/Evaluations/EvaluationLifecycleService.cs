@@ -23,6 +23,7 @@ public sealed class EvaluationLifecycleService(
     PlanLockCheck lockCheck,
     EvaluationComposer composer,
     Moderation.ModerationService moderation,
+    Rounds.AssignmentService assignment,
     TimeProvider clock)
 {
     /// <summary>
@@ -50,13 +51,28 @@ public sealed class EvaluationLifecycleService(
             return check.Consistency;
         }, ct);
 
-    /// <summary>Plan locked → scoring: bidders' names become visible to assessors who confirm their declaration.</summary>
+    /// <summary>
+    /// Plan locked → scoring: bidders' names become visible to assessors who confirm their declaration. In a round,
+    /// the assignment is frozen here: refused, with every reason, unless it gives each application its reviewers
+    /// within the cap, avoids every declared conflict and joins the design.
+    /// </summary>
     public Task<TransitionResult> OpenScoringAsync(Guid id, TransitionRequest request, CancellationToken ct = default) =>
         Transition(id, request, StageRules.OpenScoring, "scoring.opened", async (db, m) =>
         {
             if (!await db.Alternatives.AnyAsync(a => a.EvaluationId == id, ct))
             {
                 throw DomainProblem.Stage("Cannot open scoring: no bid is registered.");
+            }
+
+            if (await assignment.ProblemsAsync(db, m.Evaluation, ct) is { Count: > 0 } problems)
+            {
+                throw DomainProblem.Stage($"Cannot open scoring: the assignment of reviewers is not ready. {string.Join(" ", problems)}");
+            }
+
+            if (EvaluationComposer.ReadPlan(m.Evaluation).Evaluation.Reviews is not null)
+            {
+                var count = await db.ReviewAssignments.CountAsync(r => r.EvaluationId == id, ct);
+                audit.Record(db, id, new AuditEvent("assignment.frozen", $"evaluations/{id}/assignment", null, $"{count} reviews frozen as assigned"));
             }
 
             m.Evaluation.OpenScoring(clock.GetUtcNow());
@@ -155,10 +171,19 @@ public sealed class EvaluationLifecycleService(
             next.Panel.AddRange(old.Panel.Select(p => new PanelMember
             {
                 UserId = p.UserId, Role = p.Role, AssessorCode = p.AssessorCode, Weight = p.Weight, AssignedCriteriaJson = p.AssignedCriteriaJson,
+                TopicsJson = p.TopicsJson,
             }));
             db.Evaluations.Add(next);
             var alternatives = await db.Alternatives.AsNoTracking().Where(a => a.EvaluationId == id).ToListAsync(ct);
-            db.Alternatives.AddRange(alternatives.Select(a => new StoredAlternative { EvaluationId = next.Id, Code = a.Code, Name = a.Name, Position = a.Position, AddedAt = now }));
+            db.Alternatives.AddRange(alternatives.Select(a => new StoredAlternative
+            {
+                EvaluationId = next.Id, Code = a.Code, Name = a.Name, Position = a.Position, AddedAt = now, RequestedAmount = a.RequestedAmount, Topic = a.Topic,
+            }));
+            var reviews = await db.ReviewAssignments.AsNoTracking().Where(r => r.EvaluationId == id).ToListAsync(ct);
+            db.ReviewAssignments.AddRange(reviews.Select(r => new ReviewAssignmentEntry
+            {
+                EvaluationId = next.Id, AssessorCode = r.AssessorCode, AlternativeCode = r.AlternativeCode, Source = r.Source, AssignedBy = r.AssignedBy, AssignedAt = r.AssignedAt,
+            }));
             var judgements = await db.WeightJudgements.AsNoTracking().Where(w => w.EvaluationId == id).ToListAsync(ct);
             db.WeightJudgements.AddRange(judgements.Select(w => new WeightJudgement
             {

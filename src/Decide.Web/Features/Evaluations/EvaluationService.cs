@@ -97,7 +97,7 @@ public sealed class EvaluationService(
         var users = await db.Users.AsNoTracking().Where(u => e.Panel.Select(p => p.UserId).Contains(u.Id)).ToDictionaryAsync(u => u.Id, ct);
         var bids = seesBids
             ? await db.Alternatives.AsNoTracking().Where(a => a.EvaluationId == id).OrderBy(a => a.Position).ThenBy(a => a.Id)
-                .Select(a => new BidView(a.Code, a.Name)).ToListAsync(ct)
+                .Select(a => new BidView(a.Code, a.Name, a.RequestedAmount, a.Topic)).ToListAsync(ct)
             : null;
         var panel = e.Panel.OrderBy(p => p.Id).Select(p => new PanelSeat(
             p.UserId, users.TryGetValue(p.UserId, out var u) ? u.DisplayName : "", p.Role, p.AssessorCode, p.Weight,
@@ -130,7 +130,7 @@ public sealed class EvaluationService(
         var emails = await db.Users.AsNoTracking().Where(u => userIds.Contains(u.Id)).ToDictionaryAsync(u => u.Id, u => u.Email ?? "", ct);
         var seats = e.Panel.Where(p => p.Role != PanelRole.Facilitator).OrderBy(p => p.Id).Select(p => new SeatRequest(
             emails.GetValueOrDefault(p.UserId, ""), p.Role, p.AssessorCode,
-            p.Role is PanelRole.Assessor or PanelRole.PriceEvaluator ? p.Weight : null, EvaluationComposer.Assigned(p))).ToArray();
+            p.Role is PanelRole.Assessor or PanelRole.PriceEvaluator ? p.Weight : null, EvaluationComposer.Assigned(p), EvaluationComposer.Topics(p))).ToArray();
         return new SetupView(seats, e.Stage == EvaluationStage.Setup ? await lockCheck.ReadinessAsync(db, e, ct) : null);
     }
 
@@ -227,6 +227,7 @@ public sealed class EvaluationService(
                     AssessorCode = code,
                     Weight = s.Weight ?? 1,
                     AssignedCriteriaJson = s.Criteria is null ? null : JsonSerializer.Serialize(s.Criteria),
+                    TopicsJson = s.Topics is { Count: > 0 } topics ? JsonSerializer.Serialize(topics.Select(t => t.Trim()).Where(t => t.Length > 0).Distinct(StringComparer.OrdinalIgnoreCase).ToArray()) : null,
                 });
             }
 
@@ -271,6 +272,16 @@ public sealed class EvaluationService(
                 {
                     errors[$"bids[{i}].name"] = ["give the bidder's name (1 to 300 characters)"];
                 }
+
+                if (a.Requested is { } requested && !(requested > 0 && double.IsFinite(requested)))
+                {
+                    errors[$"bids[{i}].requested"] = ["the amount requested is a positive number, or left empty"];
+                }
+
+                if (a.Topic is { Length: > 200 })
+                {
+                    errors[$"bids[{i}].topic"] = ["keep the field within 200 characters"];
+                }
             }
 
             if (errors.Count > 0)
@@ -294,7 +305,11 @@ public sealed class EvaluationService(
             db.Alternatives.AddRange(request.Bids.Select((a, i) => new StoredAlternative
             {
                 EvaluationId = id, Code = a.Code.Trim(), Name = a.Name.Trim(), Position = i, AddedAt = now,
+                RequestedAmount = a.Requested, Topic = string.IsNullOrWhiteSpace(a.Topic) ? null : a.Topic.Trim(),
             }));
+
+            // A bid taken off the list leaves the assignment of reviewers too.
+            db.ReviewAssignments.RemoveRange(await db.ReviewAssignments.Where(r => r.EvaluationId == id && !kept.Contains(r.AlternativeCode)).ToListAsync(ct));
             db.MarkChanged(m.Evaluation); // the bids are the evaluation's
             audit.Record(db, id, new AuditEvent("bids.updated", $"evaluations/{id}/bids", before,
                 string.Join("; ", request.Bids.Select(a => $"{a.Code.Trim()}={a.Name.Trim()}"))));

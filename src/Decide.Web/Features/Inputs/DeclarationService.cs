@@ -93,7 +93,7 @@ public sealed class DeclarationService(
             var x = await access.LoadAsync(db, id, ct);
             x.Membership.Require(PanelRole.Assessor, PanelRole.PriceEvaluator);
             x.RequireDeclaration();
-            x.Membership.RequireStage(StageRules.ConfirmDeclaration);
+            x.Membership.RequireStage(x.Plan.Evaluation.Reviews is null ? StageRules.ConfirmDeclaration : StageRules.ConfirmDeclarationInRound);
             if (x.NamesConfirmed)
             {
                 throw new DomainProblem(StatusCodes.Status409Conflict, "Already confirmed",
@@ -140,7 +140,7 @@ public sealed class DeclarationService(
         {
             var x = await access.LoadAsync(db, id, ct);
             x.Membership.Require(PanelRole.Assessor, PanelRole.PriceEvaluator);
-            x.Membership.RequireStage(StageRules.DeclareConflict);
+            x.Membership.RequireStage(x.Plan.Evaluation.Reviews is null ? StageRules.DeclareConflict : StageRules.DeclareConflictInRound);
             x.RequireNamesConfirmed();
             var bidders = await InputStore.BiddersAsync(db, id, ct);
             var existing = await db.Conflicts.AsNoTracking().Where(c => c.EvaluationId == id && c.UserId == user.Id).Select(c => c.AlternativeCode).ToListAsync(ct);
@@ -204,6 +204,14 @@ public sealed class DeclarationService(
         }
 
         var code = seat.AssessorCode!;
+        if (await InputStore.AssignedAsync(db, x.Id, x.Plan.Evaluation, code, ct) is { } mine
+            && (!mine.Contains(alternative) || x.Evaluation.Stage == EvaluationStage.PlanLocked))
+        {
+            // A round: nothing to recuse from an application not assigned to them; before scoring opens the
+            // assignment is still being made, and the proposal (and the check when scoring opens) keeps them off it.
+            return;
+        }
+
         var criteria = AssignedLinguistic(x.Plan.Evaluation, seat);
         var ratings = await db.Ratings.Where(r => r.EvaluationId == x.Id && r.AssessorCode == code && r.AlternativeCode == alternative)
             .ToDictionaryAsync(r => r.CriterionId, StringComparer.Ordinal, ct);
@@ -256,7 +264,7 @@ public sealed class DeclarationService(
         return new MyDeclarationView(
             Declaration.Version, signed ? seat.DeclarationVersion : null, signed ? seat.DeclarationSignedAt : null,
             x.NamesConfirmed ? seat.NamesConfirmedAt : null,
-            signed && !x.NamesConfirmed && StageRules.ConfirmDeclaration.AllowsAt(x.Evaluation.Stage),
+            signed && !x.NamesConfirmed && (x.Plan.Evaluation.Reviews is null ? StageRules.ConfirmDeclaration : StageRules.ConfirmDeclarationInRound).AllowsAt(x.Evaluation.Stage),
             bidders, await ConflictsAsync(db, x, user.Id, ct));
     }
 

@@ -15,6 +15,16 @@ internal static class InputStore
         db.Alternatives.AsNoTracking().Where(a => a.EvaluationId == id).OrderBy(a => a.Position).ThenBy(a => a.Id).ToListAsync(ct);
 
     /// <summary>The bid with code <paramref name="code"/>, or 404 naming it.</summary>
+    /// <summary>
+    /// The applications assigned to reviewer <paramref name="code"/> in a round, or null when the plan has no review
+    /// design (every assessor rates every bid).
+    /// </summary>
+    public static async Task<HashSet<string>?> AssignedAsync(DecideDbContext db, Guid id, Decide.Core.Model.Evaluation plan, string code, CancellationToken ct) =>
+        plan.Reviews is null
+            ? null
+            : (await db.ReviewAssignments.AsNoTracking().Where(r => r.EvaluationId == id && r.AssessorCode == code)
+                .Select(r => r.AlternativeCode).ToListAsync(ct)).ToHashSet(StringComparer.Ordinal);
+
     public static StoredAlternative Bidder(IEnumerable<StoredAlternative> bidders, string code) =>
         bidders.FirstOrDefault(a => a.Code == code) ?? throw DomainProblem.NotFound($"Bid \"{code}\"");
 

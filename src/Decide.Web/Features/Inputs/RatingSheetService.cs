@@ -53,6 +53,11 @@ public sealed class RatingSheetService(
                 throw DomainProblem.Invalid("criterion", $"criterion \"{c.Id}\" is not assigned to you; your sheet has {string.Join(", ", DeclarationService.AssignedLinguistic(plan, seat))}");
             }
 
+            if (await InputStore.AssignedAsync(db, id, plan, seat.AssessorCode!, ct) is { } mine && !mine.Contains(bidder.Code))
+            {
+                throw DomainProblem.Forbidden($"\"{bidder.Name}\" is not assigned to you; in this round you rate only the {mine.Count} applications on your sheet.");
+            }
+
             if (await RecusedAsync(db, id, bidder.Code, ct))
             {
                 throw DomainProblem.Forbidden($"You declared a conflict of interest with \"{bidder.Code}\" and are recused from assessing it; its cells stay declined.");
@@ -218,6 +223,12 @@ public sealed class RatingSheetService(
         var assigned = DeclarationService.AssignedLinguistic(plan, seat);
         var criteria = plan.Criteria.Where(c => assigned.Contains(c.Id)).ToArray();
         var bidders = await InputStore.BiddersAsync(db, x.Id, ct);
+        if (await InputStore.AssignedAsync(db, x.Id, plan, code, ct) is { } mine)
+        {
+            // A round: the sheet holds the applications assigned to this reviewer and nothing else.
+            bidders = bidders.Where(b => mine.Contains(b.Code)).ToList();
+        }
+
         var recused = (await db.Conflicts.AsNoTracking().Where(c => c.EvaluationId == x.Id && c.UserId == user.Id).Select(c => c.AlternativeCode).ToListAsync(ct))
             .ToHashSet(StringComparer.Ordinal);
         var failed = (await db.GateResults.AsNoTracking().Where(g => g.EvaluationId == x.Id && !g.Passed).ToListAsync(ct))
