@@ -741,6 +741,9 @@ namespace Decide.Data.Postgres.Migrations
                         .HasMaxLength(4000)
                         .HasColumnType("character varying(4000)");
 
+                    b.Property<bool>("IsRound")
+                        .HasColumnType("boolean");
+
                     b.Property<bool>("LegalHold")
                         .HasColumnType("boolean");
 

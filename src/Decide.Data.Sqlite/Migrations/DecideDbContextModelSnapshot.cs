@@ -714,6 +714,9 @@ namespace Decide.Data.Sqlite.Migrations
                         .HasMaxLength(4000)
                         .HasColumnType("TEXT");
 
+                    b.Property<bool>("IsRound")
+                        .HasColumnType("INTEGER");
+
                     b.Property<bool>("LegalHold")
                         .HasColumnType("INTEGER");
 

@@ -64,6 +64,9 @@ public sealed class StoredEvaluation : IVersioned
     /// <summary>SHA-256 of the methodology's text version made from the plan when it was locked (the method published with the tender).</summary>
     public string? MethodologyHash { get; private set; }
 
+    /// <summary>True when the plan makes the evaluation a round (each reviewer reads only the applications assigned to them).</summary>
+    public bool IsRound { get; set; }
+
     /// <summary>True when the locked plan publishes a points award (fixed when the plan is locked).</summary>
     public bool PointsAward { get; private set; }
 

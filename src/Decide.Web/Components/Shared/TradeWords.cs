@@ -63,6 +63,10 @@ public static class TradeWords
     public static string Percent(double share, int decimals = 1) =>
         (share * 100).ToString("F" + decimals, System.Globalization.CultureInfo.InvariantCulture) + " %";
 
+    /// <summary>An amount of money, grouped in thousands ("60,000", "4,500.50"), the same on every machine.</summary>
+    public static string Money(double value) =>
+        value.ToString("#,0.##", System.Globalization.CultureInfo.InvariantCulture);
+
     /// <summary>A number with a fixed number of decimals, the same on every machine.</summary>
     public static string Number(double value, int decimals = 3) =>
         value.ToString("F" + decimals, System.Globalization.CultureInfo.InvariantCulture);

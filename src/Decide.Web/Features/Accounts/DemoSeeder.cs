@@ -37,6 +37,12 @@ public sealed class DemoSeeder(
     /// <summary>The second demo's organisation's mail domain.</summary>
     public const string PointsDomain = "harrowmere.example";
 
+    /// <summary>The third demo: a grant round in which each reviewer reads only the applications assigned to them.</summary>
+    public const string RoundDemoFile = "community-grants-round.json";
+
+    /// <summary>The invented domain of the grant round's accounts.</summary>
+    public const string RoundDomain = "millbrook.example";
+
     public async Task SeedIfEmptyAsync(CancellationToken ct = default)
     {
         if (!await roles.RoleExistsAsync(IdentitySetup.AdministratorRole))
@@ -89,6 +95,7 @@ public sealed class DemoSeeder(
             $"demo evaluation imported from samples/{DemoFile}"), admin.Id, admin.Email, now);
         await db.SaveChangesAsync(ct);
         var points = await SeedPointsDemoAsync(admin, now, ct);
+        var round = await SeedRoundDemoAsync(admin, now, ct);
 
         logger.LogInformation(
             "Seeded the demo evaluation {Reference}. Demo logins: administrator admin@decide.example; facilitator facilitator@{Domain}; assessors {Assessors}; price evaluator {Commercial}; observer probity@{Domain}; approver director@{Domain}.",
@@ -109,6 +116,8 @@ public sealed class DemoSeeder(
         Console.WriteLine($"  approver         director@{Domain}");
         Console.WriteLine($"Second demo ({points}, a points award in two stages, prices still sealed):");
         Console.WriteLine($"  facilitator      procurement@{PointsDomain}; price evaluator commercial@{PointsDomain}; assessors ashcroft, wren, lindqvist @{PointsDomain}");
+        Console.WriteLine($"Third demo ({round}, a grant round: three reviewers per application, a funding line):");
+        Console.WriteLine($"  facilitator      grants@{RoundDomain}; observer trustees@{RoundDomain}; reviewers okafor, lindgren, marsh, ferreira, quayle, haddad @{RoundDomain}");
         Console.WriteLine();
     }
 
@@ -151,6 +160,44 @@ public sealed class DemoSeeder(
 
         AuditChain.Append(db, stored.Id.ToString(), new AuditEvent("evaluation.seeded", $"evaluations/{stored.Id}", null,
             $"demo evaluation imported from samples/{PointsDemoFile}, its prices left sealed"), admin.Id, admin.Email, now);
+        await db.SaveChangesAsync(ct);
+        return stored.Reference;
+    }
+
+    /// <summary>
+    /// The grant round at moderation with every reviewer's sheet submitted: the results show the bands and the
+    /// funding line, the assignment screen who read what. Its own facilitator and observer.
+    /// </summary>
+    private async Task<string> SeedRoundDemoAsync(DecideUser admin, DateTimeOffset now, CancellationToken ct)
+    {
+        var file = EvaluationFileReader.ReadFile(SamplePath(RoundDemoFile));
+        var facilitator = await Account($"grants@{RoundDomain}", "Hollis Brightwater (Grants Manager, facilitator)");
+        var observer = await Account($"trustees@{RoundDomain}", "Maud Penhallow (Chair of Trustees, observer)");
+        var accounts = new Dictionary<string, string>(StringComparer.Ordinal);
+        foreach (var reviewer in file.Evaluation.Assessors)
+        {
+            accounts[reviewer.Id] = (await Account($"{reviewer.Id}@{RoundDomain}", reviewer.Name)).Id;
+        }
+
+        await using var db = await factory.CreateDbContextAsync(ct);
+        var stored = EvaluationImporter.Add(db, file, accounts, facilitator.Id, admin.Id, now);
+        stored.CreatedAt = now.AddDays(-35);
+        stored.LockPlan(now.AddDays(-28), Convert.ToHexStringLower(SHA256.HashData(Encoding.UTF8.GetBytes(stored.PlanJson))),
+            methodologyHash: Reports.Methodology.MethodologyDocument.Fingerprint(Recordkeeping.MethodologyInputs.From(EvaluationComposer.ReadPlan(stored))));
+        stored.OpenScoring(now.AddDays(-21));
+        stored.StartModeration(now.AddDays(-1));
+        stored.Panel.Add(new PanelMember { UserId = observer.Id, Role = PanelRole.Observer });
+        foreach (var seat in stored.Panel.Where(p => p.Role == PanelRole.Assessor))
+        {
+            seat.DeclarationSignedAt = now.AddDays(-27);
+            seat.DeclarationVersion = "2026-1";
+            seat.NamesConfirmedAt = now.AddDays(-25);
+            seat.WeightsSubmittedAt = now.AddDays(-29);
+            seat.SubmittedAt = now.AddDays(-2);
+        }
+
+        AuditChain.Append(db, stored.Id.ToString(), new AuditEvent("evaluation.seeded", $"evaluations/{stored.Id}", null,
+            $"demo grant round imported from samples/{RoundDemoFile}, its assignment frozen as the file gives it"), admin.Id, admin.Email, now);
         await db.SaveChangesAsync(ct);
         return stored.Reference;
     }

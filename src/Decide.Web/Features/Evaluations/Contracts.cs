@@ -9,7 +9,7 @@ public sealed record CreateEvaluationRequest(string Reference, string Title, str
 /// <summary>A line of the evaluations list.</summary>
 public sealed record EvaluationSummary(
     Guid Id, string Reference, string Title, string? Organisation, EvaluationStage Stage, int Revision,
-    IReadOnlyList<PanelRole> MyRoles, long Version, bool PointsAward = false, bool PricesSealed = false);
+    IReadOnlyList<PanelRole> MyRoles, long Version, bool PointsAward = false, bool PricesSealed = false, bool Round = false);
 
 /// <summary>One evaluation as the caller may see it.</summary>
 public sealed record EvaluationDetail(

@@ -32,6 +32,7 @@ public static class EvaluationImporter
             Title = e.Title,
             Organisation = file.Metadata.Organisation,
             PlanJson = PlanJson(file),
+            IsRound = file.Evaluation.Reviews is not null,
             CreatedAt = now,
             CreatedBy = createdBy,
         };

@@ -160,6 +160,7 @@ public sealed class EvaluationLifecycleService(
                 PreviousRevisionId = old.Id,
                 RevisionReason = request.Reason.Trim(),
                 PlanJson = old.PlanJson,
+                IsRound = old.IsRound,
                 MinRationaleLength = old.MinRationaleLength,
                 PricesVisibleToAssessors = old.PricesVisibleToAssessors,
                 RequiredApprovals = old.RequiredApprovals,

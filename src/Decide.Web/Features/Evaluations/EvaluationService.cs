@@ -159,6 +159,7 @@ public sealed class EvaluationService(
 
             var old = m.Evaluation.PlanJson;
             m.Evaluation.PlanJson = EvaluationFileWriter.ToJson(plan);
+            m.Evaluation.IsRound = plan.Evaluation.Reviews is not null;
             m.Evaluation.Title = plan.Evaluation.Title;
             db.MarkChanged(m.Evaluation); // a plan saved unchanged still moves the version, as every save does
             audit.Record(db, id, new AuditEvent("plan.updated", $"evaluations/{id}/plan", old, m.Evaluation.PlanJson));

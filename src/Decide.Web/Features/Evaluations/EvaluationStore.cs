@@ -9,7 +9,7 @@ namespace Decide.Web.Features.Evaluations;
 internal static class EvaluationStore
 {
     internal static EvaluationSummary Summarise(StoredEvaluation e, IEnumerable<PanelRole> roles) =>
-        new(e.Id, e.Reference, e.Title, e.Organisation, e.Stage, e.Revision, roles.Distinct().Order().ToArray(), e.Version, e.PointsAward, e.PricesSealed);
+        new(e.Id, e.Reference, e.Title, e.Organisation, e.Stage, e.Revision, roles.Distinct().Order().ToArray(), e.Version, e.PointsAward, e.PricesSealed, e.IsRound);
 
     /// <summary>Refuses a change made on a stale view of the evaluation (409 with the current summary).</summary>
     internal static void CheckVersion(StoredEvaluation e, long version)

@@ -27,6 +27,12 @@ public partial class ResultsPage : IDisposable
     [Inject]
     private ILogger<ResultsPage> Log { get; set; } = default!;
 
+    /// <summary>A round's bands, funding line and flips, once robustness is known; null when the evaluation is not a round.</summary>
+    private Decide.Core.Rounds.RoundReport? Round =>
+        _reading is null || _robustness is null ? null : _round ??= Decide.Core.Rounds.RoundAnalysis.Of(_reading.Prepared, _reading.Analysis, _reading.Prepared.Award, _robustness);
+
+    private Decide.Core.Rounds.RoundReport? _round;
+
     private IReadOnlyList<string> Order => _reading?.Analysis.Ranking.Select(r => r.Alternative).ToArray() ?? [];
 
     protected override async Task OnParametersSetAsync()
@@ -39,6 +45,7 @@ public partial class ResultsPage : IDisposable
         var ct = _closing.Token;
         _robustness = null;
         _robustnessProblem = null;
+        _round = null;
         RankedEvaluation? ranked;
         (ranked, _problem) = await Attempt.RunAsync(() => Results.RankAsync(Id, ct), Log, "ranking an evaluation");
         _reading = ranked is null ? null : ResultsReading.Of(ranked);

@@ -11,7 +11,7 @@ using Microsoft.EntityFrameworkCore.Storage.ValueConversion;
 namespace Decide.Data.Sqlite.Migrations
 {
     [DbContext(typeof(DecideDbContext))]
-    [Migration("20261204033859_ReviewAssignmentsAndRounds")]
+    [Migration("20261204034833_ReviewAssignmentsAndRounds")]
     partial class ReviewAssignmentsAndRounds
     {
         /// <inheritdoc />
@@ -716,6 +716,9 @@ namespace Decide.Data.Sqlite.Migrations
                         .IsRequired()
                         .HasMaxLength(4000)
                         .HasColumnType("TEXT");
+
+                    b.Property<bool>("IsRound")
+                        .HasColumnType("INTEGER");
 
                     b.Property<bool>("LegalHold")
                         .HasColumnType("INTEGER");

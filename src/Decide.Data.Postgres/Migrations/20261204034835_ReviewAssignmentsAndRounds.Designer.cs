@@ -12,7 +12,7 @@ using Npgsql.EntityFrameworkCore.PostgreSQL.Metadata;
 namespace Decide.Data.Postgres.Migrations
 {
     [DbContext(typeof(DecideDbContext))]
-    [Migration("20261204033901_ReviewAssignmentsAndRounds")]
+    [Migration("20261204034835_ReviewAssignmentsAndRounds")]
     partial class ReviewAssignmentsAndRounds
     {
         /// <inheritdoc />
@@ -743,6 +743,9 @@ namespace Decide.Data.Postgres.Migrations
                         .IsRequired()
                         .HasMaxLength(4000)
                         .HasColumnType("character varying(4000)");
+
+                    b.Property<bool>("IsRound")
+                        .HasColumnType("boolean");
 
                     b.Property<bool>("LegalHold")
                         .HasColumnType("boolean");

@@ -18,6 +18,13 @@ namespace Decide.Data.Sqlite.Migrations
                 maxLength: 4000,
                 nullable: true);
 
+            migrationBuilder.AddColumn<bool>(
+                name: "IsRound",
+                table: "evaluations",
+                type: "INTEGER",
+                nullable: false,
+                defaultValue: false);
+
             migrationBuilder.AddColumn<double>(
                 name: "RequestedAmount",
                 table: "alternatives",
@@ -70,6 +77,10 @@ namespace Decide.Data.Sqlite.Migrations
             migrationBuilder.DropColumn(
                 name: "TopicsJson",
                 table: "panel_members");
+
+            migrationBuilder.DropColumn(
+                name: "IsRound",
+                table: "evaluations");
 
             migrationBuilder.DropColumn(
                 name: "RequestedAmount",

@@ -19,6 +19,13 @@ namespace Decide.Data.Postgres.Migrations
                 maxLength: 4000,
                 nullable: true);
 
+            migrationBuilder.AddColumn<bool>(
+                name: "IsRound",
+                table: "evaluations",
+                type: "boolean",
+                nullable: false,
+                defaultValue: false);
+
             migrationBuilder.AddColumn<double>(
                 name: "RequestedAmount",
                 table: "alternatives",
@@ -71,6 +78,10 @@ namespace Decide.Data.Postgres.Migrations
             migrationBuilder.DropColumn(
                 name: "TopicsJson",
                 table: "panel_members");
+
+            migrationBuilder.DropColumn(
+                name: "IsRound",
+                table: "evaluations");
 
             migrationBuilder.DropColumn(
                 name: "RequestedAmount",
