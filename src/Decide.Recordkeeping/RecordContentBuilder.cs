@@ -55,6 +55,7 @@ public static class RecordContentBuilder
             evaluation, analysis, checks, identity, panel, AssessorConsistency.FromAnalysis(evaluation, analysis), moderation,
             Audit: null, Approvals: [], SoftwareVersion, snapshot, generatedAt, certificateNote,
             run.Award, run.AwardAgreement, run.AwardRobustness,
-            Reports.Methodology.MethodologyDocument.Fingerprint(MethodologyInputs.From(file)));
+            Reports.Methodology.MethodologyDocument.Fingerprint(MethodologyInputs.From(file)),
+            Round: run.Round);
     }
 }

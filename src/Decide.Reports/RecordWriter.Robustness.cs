@@ -185,7 +185,18 @@ internal sealed partial class RecordWriter
         _flow.Heading("Panel agreement");
         _flow.Paragraph(agreement.Concordance is { } w
             ? $"Kendall's W = {RecordText.Number(w.W, 3)} over {w.Rankings} assessors' orders of {w.Objects} alternatives (χ² = {RecordText.Number(w.ChiSquare, 2)}, {w.DegreesOfFreedom} degrees of freedom, p = {RecordText.Number(w.PValue, 3)}); 1 means every assessor's ratings put the alternatives in the same order."
-            : "Kendall's W is not defined here (fewer than two assessors' orders, or every order tied).");
+            : "Kendall's W is not defined here (fewer than two assessors' complete orders, or every order tied).");
+        if (agreement.OutsideConcordance is { Count: > 0 } outside)
+        {
+            _flow.Paragraph($"Left out of Kendall's W because they did not rate every alternative: {string.Join(", ", outside.Select(_names.Assessor))}. W compares complete orders; completing theirs with the panel's values would overstate the agreement.");
+        }
+
+        if (agreement.Reliability is { } reliability)
+        {
+            _flow.Bullets(new[] { reliability.Ordinal, reliability.Interval }.OfType<Decide.Core.Robustness.AlphaEstimate>().Select(a =>
+                $"Krippendorff's alpha, {(a.Metric == Decide.Core.Robustness.AlphaMetric.Ordinal ? "on the order of the terms" : "on the centres of the terms' triangles")}: {RecordText.Number(a.Alpha, 3)} (95% bootstrap over cells {RecordText.Number(a.Low, 3)} to {RecordText.Number(a.High, 3)}; {a.Units} cells rated by two or more, {a.PairableValues} ratings). 1 is full agreement, 0 agreement no better than chance; valid when each assessor rates only some cells (Krippendorff 2011).").ToArray());
+        }
+
         if (agreement.ForDiscussion.Count == 0)
         {
             _flow.Paragraph($"No cell's terms are more than {agreement.Tolerance} scale steps apart.");
@@ -200,6 +211,11 @@ internal sealed partial class RecordWriter
                     _names.Alternative(c.Alternative), _names.Criterion(c.Criterion), c.Spread.ToString(CultureInfo.InvariantCulture),
                     string.Join(", ", c.Terms.Select(t => $"{_names.Assessor(t.Assessor)} {t.Term}")),
                 ]));
+        }
+
+        if (_content.Round is { } round)
+        {
+            Round(round);
         }
     }
 }

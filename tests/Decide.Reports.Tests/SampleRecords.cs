@@ -58,7 +58,8 @@ internal static class SampleRecords
             SelfSignedCertificate.Note,
             run.Award,
             run.AwardAgreement,
-            run.AwardRobustness);
+            run.AwardRobustness,
+            Round: run.Round);
     }
 
     private static string FindRoot()

@@ -29,6 +29,7 @@ namespace Decide.Reports.Content;
 /// <param name="AwardRobustness">The award's robustness checks.</param>
 /// <param name="Methodology">SHA-256 of the methodology's text version made from the plan the figures were computed with.</param>
 /// <param name="PublishedMethodology">SHA-256 of the methodology stored when the plan was locked (what was published), or null when not known.</param>
+/// <param name="Round">A round's funding line, bands and flips, when the evaluation is a round or has a funding line.</param>
 /// <param name="CertificateNote">
 /// What the reader should know about the signing certificate (for a self-signed one,
 /// <see cref="Signing.SelfSignedCertificate.Note"/>); null prints nothing.
@@ -51,7 +52,8 @@ public sealed record RecordContent(
     AwardAgreement? AwardAgreement = null,
     AwardRobustnessResult? AwardRobustness = null,
     string? Methodology = null,
-    string? PublishedMethodology = null)
+    string? PublishedMethodology = null,
+    Decide.Core.Rounds.RoundReport? Round = null)
 {
     /// <summary>The SHA-256 of <see cref="Snapshot"/>, lower-case hex: the record's fingerprint.</summary>
     public string Fingerprint => RecordFingerprint.Of(Snapshot.Span);
