@@ -50,6 +50,10 @@ public sealed class TopsisWorkspace
     /// <summary>A scratch weight vector callers may fill before calling <see cref="Evaluate"/>.</summary>
     public Tfn[] Weights { get; }
 
+    /// <summary>Runs fuzzy TOPSIS without ranking (sweeps and root-finding need the closeness alone).</summary>
+    public void EvaluateCloseness(ReadOnlySpan<Tfn> matrix, ReadOnlySpan<bool> isCost, ReadOnlySpan<Tfn> weights, IdealPoints ideal) =>
+        FuzzyTopsis.Evaluate(matrix, Criteria, isCost, weights, ideal, Weighted, DPlus, DMinus, Closeness);
+
     /// <summary>Runs fuzzy TOPSIS and ranks; results stay in this workspace's arrays.</summary>
     public void Evaluate(ReadOnlySpan<Tfn> matrix, ReadOnlySpan<bool> isCost, ReadOnlySpan<Tfn> weights, IdealPoints ideal)
     {

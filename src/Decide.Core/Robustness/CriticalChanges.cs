@@ -34,6 +34,15 @@ namespace Decide.Core.Robustness;
 /// </remarks>
 public static class CriticalChanges
 {
+    /// <summary>
+    /// Up to this many ranked alternatives every pair gets an entry, reversing or not. Above it (a round of hundreds
+    /// of applications, whose pairs run to the hundred thousand) only the leader's pairs and the neighbouring pairs
+    /// of the ranking, and of those only the ones some change of weight reverses. The most critical criteria stay
+    /// exact: moving one weight away from its value, the first reversal to happen is between two alternatives that
+    /// are neighbours in the ranking as it stands, so the smallest change over every pair is a neighbour's.
+    /// </summary>
+    public const int EveryPairUpTo = 40;
+
     /// <summary>Computes critical changes from the sweeps and the base ranking.</summary>
     /// <param name="prepared">The prepared evaluation (kept for symmetry with the other analyses).</param>
     /// <param name="baseResult">The base ranking; pairs are taken in its order, leader first.</param>
@@ -44,29 +53,51 @@ public static class CriticalChanges
         ArgumentNullException.ThrowIfNull(prepared);
         var ranking = baseResult.Ranking;
         var changes = new List<CriticalChange>();
+        var everyPair = ranking.Count <= EveryPairUpTo;
         foreach (var sweep in sweeps)
         {
             var current = sweep.Current;
+
+            // The confirmed reversal shares of each unordered pair, found once per sweep rather than per pair.
+            var byPair = new Dictionary<(string, string), List<double>>();
+            foreach (var r in sweep.Reversals.Where(r => r.Confirmed))
+            {
+                var key = string.CompareOrdinal(r.Below, r.Above) < 0 ? (r.Below, r.Above) : (r.Above, r.Below);
+                (byPair.TryGetValue(key, out var list) ? list : byPair[key] = []).Add(r.Weight);
+            }
+
             for (var a = 0; a < ranking.Count; a++)
             {
+                if (!everyPair && byPair.Count == 0)
+                {
+                    break;
+                }
+
                 for (var b = a + 1; b < ranking.Count; b++)
                 {
+                    if (!everyPair && a > 0 && b > a + 1)
+                    {
+                        break; // a large round: the leader's pairs and neighbours only
+                    }
+
                     if (ranking[a].Rank == ranking[b].Rank)
                     {
                         continue; // tied in the base ranking: nothing to reverse
                     }
 
                     string leader = ranking[a].Alternative, challenger = ranking[b].Alternative;
-                    var points = sweep.Reversals
-                        .Where(r => r.Confirmed && ((r.Below == leader && r.Above == challenger) || (r.Below == challenger && r.Above == leader)))
-                        .Select(r => r.Weight)
-                        .ToArray();
-                    if (points.Length == 0)
+                    var key = string.CompareOrdinal(leader, challenger) < 0 ? (leader, challenger) : (challenger, leader);
+                    if (!byPair.TryGetValue(key, out var found))
                     {
-                        changes.Add(new CriticalChange(sweep.Criterion, leader, challenger, current, null, null, null, null, null, null));
+                        if (everyPair)
+                        {
+                            changes.Add(new CriticalChange(sweep.Criterion, leader, challenger, current, null, null, null, null, null, null));
+                        }
+
                         continue;
                     }
 
+                    var points = found.ToArray();
                     var nearest = points.MinBy(t => Math.Abs(t - current));
                     var absolute = Math.Abs(nearest - current);
                     var feasible = points.Where(t => Delta(current, t) is not null).ToArray();

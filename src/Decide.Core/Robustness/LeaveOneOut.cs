@@ -15,17 +15,22 @@ namespace Decide.Core.Robustness;
 public static class LeaveOneOut
 {
     /// <summary>One entry per assessor, in panel order.</summary>
-    public static IReadOnlyList<LeaveOneOutResult> Run(PreparedEvaluation prepared, AnalysisResult baseResult)
+    /// <param name="prepared">The prepared evaluation.</param>
+    /// <param name="baseResult">Its ranking.</param>
+    /// <param name="threads">How many assessors to re-run at once (a round's panel of sixty is sixty analyses); the entries do not depend on it.</param>
+    public static IReadOnlyList<LeaveOneOutResult> Run(PreparedEvaluation prepared, AnalysisResult baseResult, int threads = 1)
     {
+        ArgumentOutOfRangeException.ThrowIfLessThan(threads, 1);
         var source = prepared.Source;
         var winners = Winners(baseResult);
-        var results = new List<LeaveOneOutResult>();
-        foreach (var assessor in source.Assessors)
+        var results = new LeaveOneOutResult[source.Assessors.Count];
+        Parallel.For(0, results.Length, new ParallelOptions { MaxDegreeOfParallelism = threads }, k =>
         {
+            var assessor = source.Assessors[k];
             if (source.Assessors.Count == 1)
             {
-                results.Add(new LeaveOneOutResult(assessor.Id, null, [], false, "the only assessor: without them there is no panel"));
-                continue;
+                results[k] = new LeaveOneOutResult(assessor.Id, null, [], false, "the only assessor: without them there is no panel");
+                return;
             }
 
             var without = Without(source, assessor.Id);
@@ -33,14 +38,14 @@ public static class LeaveOneOut
             {
                 var result = DecisionEngine.Analyse(without);
                 var ranking = result.Ranking.Select(r => r.Alternative).ToArray();
-                results.Add(new LeaveOneOutResult(assessor.Id, ranking.FirstOrDefault(), ranking, !winners.SetEquals(Winners(result))));
+                results[k] = new LeaveOneOutResult(assessor.Id, ranking.FirstOrDefault(), ranking, !winners.SetEquals(Winners(result)));
             }
             catch (InvalidEvaluationException e)
             {
                 var reasons = string.Join("; ", e.Errors.Take(3).Select(x => x.Reason));
-                results.Add(new LeaveOneOutResult(assessor.Id, null, [], false, $"no ranking without this assessor: {reasons}"));
+                results[k] = new LeaveOneOutResult(assessor.Id, null, [], false, $"no ranking without this assessor: {reasons}");
             }
-        }
+        });
 
         return results;
     }

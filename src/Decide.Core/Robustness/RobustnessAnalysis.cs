@@ -16,14 +16,14 @@ public static class RobustnessAnalysis
     public static RobustnessResult Run(PreparedEvaluation prepared, AnalysisResult baseResult, RobustnessOptions? options = null)
     {
         options ??= new RobustnessOptions();
-        var sweeps = WeightSweeps.Run(prepared);
+        var sweeps = WeightSweeps.Run(prepared, options.Threads);
         var sensitivity = new SensitivityResult(
             sweeps,
             CriticalChanges.Compute(prepared, baseResult, sweeps),
             prepared.Alternatives.Count > 0 && options.Draws > 0
                 ? RankAcceptabilityAnalysis.Run(prepared, options.Draws, options.Seed, prepared.Source.Options.AcceptabilityWeights, options.Threads)
                 : new AcceptabilityResult(0, options.Seed, prepared.Source.Options.AcceptabilityWeights, [], []),
-            LeaveOneOut.Run(prepared, baseResult),
+            LeaveOneOut.Run(prepared, baseResult, options.Threads),
             WithoutAlternative.Run(prepared),
             prepared.Alternatives.Count > 0 ? MethodCrossCheck.Run(prepared, baseResult) : []);
         var agreement = PanelAgreement.Measure(prepared, prepared.Source.Options.DivergenceTolerance);

@@ -28,15 +28,12 @@ public static class WeightSweeps
     private const double ConfirmStep = 1e-6;
     private const double Zero = 1e-12;
 
-    /// <summary>Sweeps every scored criterion.</summary>
-    public static IReadOnlyList<WeightSweepResult> Run(PreparedEvaluation prepared)
+    /// <summary>Sweeps every scored criterion, <paramref name="threads"/> criteria at a time (the results do not depend on it).</summary>
+    public static IReadOnlyList<WeightSweepResult> Run(PreparedEvaluation prepared, int threads = 1)
     {
+        ArgumentOutOfRangeException.ThrowIfLessThan(threads, 1);
         var results = new WeightSweepResult[prepared.Criteria.Count];
-        for (var k = 0; k < results.Length; k++)
-        {
-            results[k] = Sweep(prepared, k);
-        }
-
+        Parallel.For(0, results.Length, new ParallelOptions { MaxDegreeOfParallelism = threads }, k => results[k] = Sweep(prepared, k));
         return results;
     }
 
@@ -122,11 +119,7 @@ public static class WeightSweeps
         return 0.5 * (lo + hi);
     }
 
-    private static double Difference(Sweeper sweep, int a, int b, double t)
-    {
-        var cc = sweep.Closeness(t);
-        return cc[a] - cc[b];
-    }
+    private static double Difference(Sweeper sweep, int a, int b, double t) => sweep.ClosenessOf(a, t) - sweep.ClosenessOf(b, t);
 
     private static int Sign(double x) => x > Zero ? 1 : x < -Zero ? -1 : 0;
 
@@ -137,12 +130,40 @@ public static class WeightSweeps
         private readonly int _k;
         private readonly double _current;
 
+        // For one alternative's closeness at a time (root-finding between two of them): the normalised matrix before
+        // weighting and each column's largest upper and smallest lower value, so that a step costs m, not n × m.
+        private readonly Tfn[] _normalised;
+        private readonly double[] _columnUpper;
+        private readonly double[] _columnLower;
+        private readonly Tfn[] _scratch;
+
         public Sweeper(PreparedEvaluation prepared, int k)
         {
             Prepared = prepared;
             _k = k;
             _current = prepared.Weights[k].Crisp;
             _workspace = new TopsisWorkspace(prepared.Alternatives.Count, prepared.Criteria.Count);
+            int n = prepared.Alternatives.Count, m = prepared.Criteria.Count;
+            _normalised = new Tfn[n * m];
+            _columnUpper = new double[m];
+            _columnLower = new double[m];
+            _scratch = new Tfn[m];
+            var ones = new Tfn[m];
+            Array.Fill(ones, Tfn.One);
+
+            // The same products FuzzyTopsis.Normalise forms, with unit weights: (x · scale) and (aMin / x).
+            FuzzyTopsis.Normalise(prepared.Matrix, n, m, prepared.IsCost, ones, _normalised);
+            for (var j = 0; j < m; j++)
+            {
+                double hi = double.NegativeInfinity, lo = double.PositiveInfinity;
+                for (var i = 0; i < n; i++)
+                {
+                    hi = Math.Max(hi, _normalised[(i * m) + j].Upper);
+                    lo = Math.Min(lo, _normalised[(i * m) + j].Lower);
+                }
+
+                (_columnUpper[j], _columnLower[j]) = (hi, lo);
+            }
         }
 
         public PreparedEvaluation Prepared { get; }
@@ -158,8 +179,52 @@ public static class WeightSweeps
                 weights[j] = (j == _k ? own : others) * w[j];
             }
 
-            _workspace.Evaluate(Prepared.Matrix, Prepared.IsCost, weights, Prepared.Source.Options.Ideal);
+            _workspace.EvaluateCloseness(Prepared.Matrix, Prepared.IsCost, weights, Prepared.Source.Options.Ideal);
             return _workspace.Closeness;
+        }
+
+        /// <summary>
+        /// Alternative <paramref name="i"/>'s closeness with the share set to <paramref name="t"/>: the same
+        /// arithmetic as <see cref="Closeness"/> in the same order, so the same number to the last bit, for one row.
+        /// Multiplying by a positive weight keeps the order of a column, so its extreme values are those of the
+        /// unweighted column times the weight.
+        /// </summary>
+        public double ClosenessOf(int i, double t)
+        {
+            var w = Prepared.FuzzyWeights;
+            var m = w.Length;
+            var own = t / _current;
+            var others = (1 - t) / (1 - _current);
+            for (var j = 0; j < m; j++)
+            {
+                _scratch[j] = (j == _k ? own : others) * w[j];
+            }
+
+            var bound = FuzzyTopsis.WeightBound(_scratch);
+            var extreme = Prepared.Source.Options.Ideal == Model.IdealPoints.Extreme;
+            double plus = 0, minus = 0;
+            for (var j = 0; j < m; j++)
+            {
+                var wj = bound == 1 ? _scratch[j] : Tfn.Unchecked(_scratch[j].Lower / bound, _scratch[j].Middle / bound, _scratch[j].Upper / bound);
+                var r = _normalised[(i * m) + j];
+                var v = Tfn.Unchecked(r.Lower * wj.Lower, r.Middle * wj.Middle, r.Upper * wj.Upper);
+                Tfn best, worst;
+                if (extreme)
+                {
+                    double hi = _columnUpper[j] * wj.Upper, lo = _columnLower[j] * wj.Lower;
+                    (best, worst) = (Tfn.Unchecked(hi, hi, hi), Tfn.Unchecked(lo, lo, lo));
+                }
+                else
+                {
+                    (best, worst) = (Tfn.One, Tfn.Zero);
+                }
+
+                plus += Tfn.Distance(v, best);
+                minus += Tfn.Distance(v, worst);
+            }
+
+            var total = plus + minus;
+            return total > 0 ? minus / total : 0.5;
         }
     }
 }
