@@ -68,6 +68,7 @@ public static class EvaluationValidator
             _found.AddRange(Award.AwardChecks.Plan(e));
             if (planOnly)
             {
+                _found.AddRange(Rounds.DesignChecks.Plan(e));
                 return;
             }
 

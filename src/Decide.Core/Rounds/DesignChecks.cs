@@ -14,6 +14,32 @@ public static class DesignChecks
     /// <summary>Where the funding line sits in the portable file.</summary>
     public const string FundingPath = "$.funding";
 
+    /// <summary>The problems of a round's plan alone: reviewers per application, the load cap and the budget.</summary>
+    public static IReadOnlyList<EvaluationError> Plan(Evaluation e)
+    {
+        ArgumentNullException.ThrowIfNull(e);
+        var errors = new List<EvaluationError>();
+        if (e.Reviews is { } design)
+        {
+            if (design.ReviewersPerApplication < 1)
+            {
+                errors.Add(new($"{Path}.reviewersPerApplication", $"each application needs at least one reviewer; got {design.ReviewersPerApplication}"));
+            }
+
+            if (design.MaxLoad < 1)
+            {
+                errors.Add(new($"{Path}.maxLoad", $"the most applications one reviewer may read is 1 or more; got {design.MaxLoad}"));
+            }
+        }
+
+        if (e.Funding is { } funding && (!(funding.Budget > 0) || double.IsInfinity(funding.Budget)))
+        {
+            errors.Add(new($"{FundingPath}.budget", $"the budget is a positive amount; got {funding.Budget}"));
+        }
+
+        return errors;
+    }
+
     /// <summary>Every problem of <see cref="Evaluation.Reviews"/> and <see cref="Evaluation.Funding"/>; empty when both are sound or absent.</summary>
     /// <param name="e">The evaluation.</param>
     /// <param name="conflicts">Declared conflicts (reviewer, application) the assignment must avoid; may be empty.</param>

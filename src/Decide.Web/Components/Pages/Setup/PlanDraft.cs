@@ -54,6 +54,24 @@ public sealed class PlanDraft
     /// <summary>The published award method.</summary>
     public AwardDraft Award { get; set; } = new();
 
+    /// <summary>True when each reviewer reads only the applications assigned to them (a grant round).</summary>
+    public bool Round { get; set; }
+
+    /// <summary>Reviewers per application in a round.</summary>
+    public int ReviewersPerApplication { get; set; } = 3;
+
+    /// <summary>The most applications one reviewer may be given in a round.</summary>
+    public int MaxLoad { get; set; } = 20;
+
+    /// <summary>The round's budget, or null for no funding line.</summary>
+    public double? Budget { get; set; }
+
+    /// <summary>How the budget is spent down the ranking.</summary>
+    public FundingRule FundingRule { get; set; } = FundingRule.StopAtFirstUnaffordable;
+
+    /// <summary>The unit of the budget and the requested amounts ("EUR").</summary>
+    public string? Currency { get; set; }
+
     public AggregationRule Aggregation { get; set; } = AggregationRule.Mean;
 
     public IdealPoints Ideal { get; set; } = IdealPoints.Unit;
@@ -92,6 +110,12 @@ public sealed class PlanDraft
             Weighting = read.Weighting,
             PointsTotal = read.Points?.Total ?? 100,
             Award = AwardDraft.From(read.Award),
+            Round = read.Reviews is not null,
+            ReviewersPerApplication = read.Reviews?.ReviewersPerApplication ?? 3,
+            MaxLoad = read.Reviews?.MaxLoad ?? 20,
+            Budget = read.Funding?.Budget,
+            FundingRule = read.Funding?.Rule ?? FundingRule.StopAtFirstUnaffordable,
+            Currency = read.Funding?.Currency,
             Aggregation = read.Options.Aggregation,
             Ideal = read.Options.Ideal,
             DivergenceTolerance = read.Options.DivergenceTolerance,
@@ -144,6 +168,8 @@ public sealed class PlanDraft
                 .ToDictionary(c => c.Id, c => c.MinimumTerm!, StringComparer.Ordinal))
             : null,
         Options = new AnalysisOptions(Aggregation, Ideal, DivergenceTolerance, AcceptabilityWeights),
+        Reviews = Round ? new ReviewDesign(ReviewersPerApplication, MaxLoad, []) : null,
+        Funding = Budget is { } budget ? new FundingPlan(budget, FundingRule, string.IsNullOrWhiteSpace(Currency) ? null : Currency.Trim()) : null,
     };
 
     /// <summary>The published points as the plan states them: every group and scored criterion that has points.</summary>

@@ -16,6 +16,9 @@ public sealed class SeatDraft
     /// <summary>The criteria assigned to an assessor; empty means every criterion rated in words.</summary>
     public HashSet<string> Criteria { get; } = new(StringComparer.Ordinal);
 
+    /// <summary>The fields a reviewer knows, comma-separated as typed (rounds).</summary>
+    public string Topics { get; set; } = "";
+
     /// <summary>Assessors and price evaluators carry a code; assessors also a weight and criteria.</summary>
     public bool Scores => Role is PanelRole.Assessor or PanelRole.PriceEvaluator;
 }

@@ -97,11 +97,11 @@ public partial class SetupPage
         _draft = _detail.Plan is { } plan ? PlanDraft.From(plan, _detail.Settings) : null;
         _seats = (_setup?.Seats ?? []).Select(s =>
         {
-            var seat = new SeatDraft { Email = s.Email, Role = s.Role, AssessorCode = s.AssessorCode, Weight = s.Weight ?? 1 };
+            var seat = new SeatDraft { Email = s.Email, Role = s.Role, AssessorCode = s.AssessorCode, Weight = s.Weight ?? 1, Topics = string.Join(", ", s.Topics ?? []) };
             seat.Criteria.UnionWith(s.Criteria ?? []);
             return seat;
         }).ToList();
-        _bids = (_detail.Bids ?? []).Select(a => new BidDraft { Code = a.Code, Name = a.Name }).ToList();
+        _bids = (_detail.Bids ?? []).Select(a => new BidDraft { Code = a.Code, Name = a.Name, Requested = a.Requested, Topic = a.Topic }).ToList();
         Snapshot();
         if (_detail.Summary.Stage != EvaluationStage.Setup && _step == 0 && !_changedElsewhere)
         {
@@ -116,9 +116,9 @@ public partial class SetupPage
         _savedBids = BidsJson();
     }
 
-    private string SeatsJson() => JsonSerializer.Serialize(_seats.Select(s => new { s.Email, s.Role, s.AssessorCode, s.Weight, Criteria = s.Criteria.Order().ToArray() }));
+    private string SeatsJson() => JsonSerializer.Serialize(_seats.Select(s => new { s.Email, s.Role, s.AssessorCode, s.Weight, Criteria = s.Criteria.Order().ToArray(), s.Topics }));
 
-    private string BidsJson() => JsonSerializer.Serialize(_bids.Select(b => new { b.Code, b.Name }));
+    private string BidsJson() => JsonSerializer.Serialize(_bids.Select(b => new { b.Code, b.Name, b.Requested, b.Topic }));
 
     private void Go(int step)
     {
@@ -189,7 +189,8 @@ public partial class SetupPage
     private async Task<bool> SavePanelAsync()
     {
         var seats = _seats.Select(s => new SeatRequest(s.Email.Trim(), s.Role, s.Scores ? s.AssessorCode?.Trim() : null,
-            s.Role == PanelRole.Assessor ? s.Weight : null, s.Role == PanelRole.Assessor && s.Criteria.Count > 0 ? s.Criteria.Order().ToArray() : null)).ToArray();
+            s.Role == PanelRole.Assessor ? s.Weight : null, s.Role == PanelRole.Assessor && s.Criteria.Count > 0 ? s.Criteria.Order().ToArray() : null,
+            s.Role == PanelRole.Assessor ? s.Topics.Split(',', StringSplitOptions.TrimEntries | StringSplitOptions.RemoveEmptyEntries) : null)).ToArray();
         var result = await RunAsync(() => Evaluations.UpdatePanelAsync(Id, new UpdatePanelRequest(seats, _detail!.Summary.Version)), "saving the panel");
         if (result is null)
         {
@@ -202,7 +203,7 @@ public partial class SetupPage
 
     private async Task<bool> SaveBidsAsync()
     {
-        var bids = _bids.Select(b => new BidView(b.Code.Trim(), b.Name.Trim())).ToArray();
+        var bids = _bids.Select(b => new BidView(b.Code.Trim(), b.Name.Trim(), b.Requested, string.IsNullOrWhiteSpace(b.Topic) ? null : b.Topic.Trim())).ToArray();
         var result = await RunAsync(() => Evaluations.UpdateBidsAsync(Id, new UpdateBidsRequest(bids, _detail!.Summary.Version)), "saving the bids");
         if (result is null)
         {
