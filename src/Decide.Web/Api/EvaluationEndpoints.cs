@@ -16,6 +16,8 @@ public static class EvaluationEndpoints
         group.MapPut("/{id:guid}/plan", UpdatePlan).WithSummary("Replace the plan (facilitator, setup only).");
         group.MapPut("/{id:guid}/panel", UpdatePanel).WithSummary("Replace the panel's seats (facilitator, setup only).");
         group.MapPut("/{id:guid}/bids", UpdateBids).WithSummary("Replace the list of bids (facilitator, before scoring).");
+        group.MapPost("/{id:guid}/bids/import", ImportBids)
+            .WithSummary("Read a list of bids or applications from a spreadsheet (.xlsx) or CSV file (base64): every problem by sheet, row and column; with preview nothing is stored, otherwise it replaces the list (facilitator, before scoring).");
         group.MapPost("/{id:guid}/lock-plan", LockPlan).WithSummary("Freeze the plan and the weights (facilitator).");
         group.MapPost("/{id:guid}/open-scoring", OpenScoring).WithSummary("Open scoring (facilitator).");
         group.MapPost("/{id:guid}/start-moderation", StartModeration).WithSummary("Close scoring and start moderation (facilitator).");
@@ -24,6 +26,9 @@ public static class EvaluationEndpoints
         group.MapPut("/{id:guid}/legal-hold", LegalHold).WithSummary("Set or lift a legal hold (administrator).");
         return api;
     }
+
+    private static async Task<Ok<ImportBidsView>> ImportBids(Guid id, ImportBidsRequest request, EvaluationService service, CancellationToken ct) =>
+        TypedResults.Ok(await service.ImportBidsAsync(id, request, ct));
 
     private static async Task<Ok<IReadOnlyList<EvaluationSummary>>> List(EvaluationService service, CancellationToken ct) =>
         TypedResults.Ok(await service.ListAsync(ct));

@@ -41,6 +41,7 @@ public sealed class AuthorisationMatrixTests(AuthorisationFixture fixture) : ICl
         ["PUT /api/evaluations/{id:guid}/plan"] = "1433A333",
         ["PUT /api/evaluations/{id:guid}/panel"] = "1433A333",
         ["PUT /api/evaluations/{id:guid}/bids"] = "1433A333",
+        ["POST /api/evaluations/{id:guid}/bids/import"] = "1433A333",
         ["POST /api/evaluations/{id:guid}/lock-plan"] = "1433A333",
         ["POST /api/evaluations/{id:guid}/open-scoring"] = "1433A333",
         ["POST /api/evaluations/{id:guid}/start-moderation"] = "1433A333",

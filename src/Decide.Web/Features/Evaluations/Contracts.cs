@@ -76,3 +76,12 @@ public sealed record SetupView(IReadOnlyList<SeatRequest> Seats, LockReadiness? 
 
 /// <summary>What stops the plan from being locked (<paramref name="Blocking"/>), and what the facilitator should know (<paramref name="Warnings"/>).</summary>
 public sealed record LockReadiness(IReadOnlyList<string> Blocking, IReadOnlyList<string> Warnings);
+
+/// <summary>
+/// A list of bids or applications uploaded as a spreadsheet (.xlsx) or CSV file, base64-encoded; with
+/// <paramref name="Preview"/> it is only read and shown, otherwise it replaces the list (as <see cref="UpdateBidsRequest"/>).
+/// </summary>
+public sealed record ImportBidsRequest(string FileName, string Content, bool Preview, long Version);
+
+/// <summary>What an uploaded list holds and whether it was stored.</summary>
+public sealed record ImportBidsView(IReadOnlyList<BidView> Bids, bool Stored, EvaluationSummary? Evaluation);

@@ -252,6 +252,44 @@ public sealed class EvaluationService(
             return EvaluationStore.Summarise(m.Evaluation, m.Roles);
         }, ct);
 
+    /// <summary>
+    /// Reads a list of bids or applications from a spreadsheet or CSV file: every problem by sheet, row and column,
+    /// and nothing stored unless the whole file is sound; a preview stores nothing at all (facilitator, before scoring).
+    /// </summary>
+    public async Task<ImportBidsView> ImportBidsAsync(Guid id, ImportBidsRequest request, CancellationToken ct = default)
+    {
+        await using (var db = await factory.CreateDbContextAsync(ct))
+        {
+            var m = await access.LoadAsync(db, id, ct);
+            m.Require(PanelRole.Facilitator);
+            m.RequireStage(StageRules.ChangeBids);
+        }
+
+        byte[] content;
+        try
+        {
+            content = Convert.FromBase64String(request.Content ?? "");
+        }
+        catch (FormatException)
+        {
+            throw DomainProblem.Invalid("content", "the file's content must be sent base64-encoded");
+        }
+
+        var reading = Exchange.ApplicationSheet.Read(request.FileName ?? "", content);
+        if (reading.Errors.Count > 0)
+        {
+            throw DomainProblem.Invalid(reading.Errors.GroupBy(e => e.Place).ToDictionary(g => g.Key, g => g.Select(e => e.Reason).ToArray()));
+        }
+
+        if (request.Preview)
+        {
+            return new ImportBidsView(reading.Rows, false, null);
+        }
+
+        var summary = await UpdateBidsAsync(id, new UpdateBidsRequest(reading.Rows, request.Version), ct);
+        return new ImportBidsView(reading.Rows, true, summary);
+    }
+
     public Task<EvaluationSummary> UpdateBidsAsync(Guid id, UpdateBidsRequest request, CancellationToken ct = default) =>
         UnitOfWork.RunAsync(factory, async db =>
         {

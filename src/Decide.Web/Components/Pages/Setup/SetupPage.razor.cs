@@ -214,6 +214,13 @@ public partial class SetupPage
         return true;
     }
 
+    /// <summary>An uploaded list was stored: read everything again, so the list shows what the file held.</summary>
+    private async Task BidsUploadedAsync(EvaluationSummary summary)
+    {
+        await LoadAsync();
+        _status = $"List of {Noun} taken from the file and saved.";
+    }
+
     /// <summary>Takes the new version; the readiness for the lock is read again, since it depends on what was saved.</summary>
     private async Task AfterSaveAsync(EvaluationSummary summary, string status)
     {
