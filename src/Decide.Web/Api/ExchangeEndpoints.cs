@@ -22,6 +22,12 @@ public static class ExchangeEndpoints
             .WithSummary("The evaluation methodology for the tender pack, made from the plan, as a PDF (anyone on the panel; a draft before the plan is locked).");
         group.MapGet("/{id:guid}/methodology.txt", MethodologyText)
             .WithSummary("The evaluation methodology as plain text; its SHA-256 is the fingerprint stored when the plan is locked and printed in the record.");
+        group.MapGet("/{id:guid}/export/ratings.xlsx", RatingsXlsx)
+            .WithSummary("Every rating with its rationale, declined reason and moderated value, as an .xlsx workbook (facilitator, observer, approver).");
+        group.MapGet("/{id:guid}/export/results.xlsx", ResultsXlsx)
+            .WithSummary("The ranking and, in a round, the bands and the funding line, as an .xlsx workbook (panel, from moderation on).");
+        group.MapGet("/{id:guid}/export/assignment.xlsx", AssignmentXlsx)
+            .WithSummary("Who reads which application in a round, as an .xlsx workbook (facilitator, observer, approver).");
         group.MapPost("/import", Import)
             .WithSummary("Store a decide-evaluation/1 file as a new evaluation at stage Setup, naming the facilitator and each assessor's account (administrator).");
         return api;
@@ -38,6 +44,15 @@ public static class ExchangeEndpoints
 
     private static async Task<FileContentHttpResult> AwardCsv(Guid id, ExchangeService service, CancellationToken ct) =>
         Download(await service.AwardCsvAsync(id, ct));
+
+    private static async Task<FileContentHttpResult> RatingsXlsx(Guid id, ExchangeService service, CancellationToken ct) =>
+        Download(await service.RatingsXlsxAsync(id, ct));
+
+    private static async Task<FileContentHttpResult> ResultsXlsx(Guid id, ExchangeService service, CancellationToken ct) =>
+        Download(await service.ResultsXlsxAsync(id, ct));
+
+    private static async Task<FileContentHttpResult> AssignmentXlsx(Guid id, ExchangeService service, CancellationToken ct) =>
+        Download(await service.AssignmentXlsxAsync(id, ct));
 
     private static async Task<FileContentHttpResult> MethodologyPdf(Guid id, ExchangeService service, CancellationToken ct) =>
         Download(await service.MethodologyAsync(id, pdf: true, ct));

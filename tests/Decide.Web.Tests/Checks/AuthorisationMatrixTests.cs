@@ -86,6 +86,10 @@ public sealed class AuthorisationMatrixTests(AuthorisationFixture fixture) : ICl
         ["GET /api/evaluations/{id:guid}/export"] = "1433AAA3",
         ["GET /api/evaluations/{id:guid}/export/ratings.csv"] = "1433AAA3",
         ["GET /api/evaluations/{id:guid}/export/results.csv"] = "14AAAAA3",
+        ["GET /api/evaluations/{id:guid}/export/ratings.xlsx"] = "1433AAA3",
+        ["GET /api/evaluations/{id:guid}/export/results.xlsx"] = "14AAAAA3",
+        // The demo is not a round: those who may read the assignment get a 409 saying so.
+        ["GET /api/evaluations/{id:guid}/export/assignment.xlsx"] = "1433AAA3",
         ["GET /api/evaluations/{id:guid}/export/award.csv"] = "14AAAAA3",
         ["GET /api/evaluations/{id:guid}/methodology.pdf"] = "14AAAAA3",
         ["GET /api/evaluations/{id:guid}/methodology.txt"] = "14AAAAA3",

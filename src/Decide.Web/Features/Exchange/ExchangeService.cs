@@ -60,6 +60,98 @@ public sealed partial class ExchangeService(
             return await Download(db, m.Evaluation, "ratings.exported", "export/ratings.csv", FileName(m.Evaluation, "-ratings.csv"), CsvType, csv.ToUtf8(), ct);
         }, ct);
 
+    /// <summary>Every rating, as <see cref="RatingsCsvAsync"/>, as an .xlsx workbook (facilitator, observer, approver).</summary>
+    public Task<DownloadFile> RatingsXlsxAsync(Guid id, CancellationToken ct = default) =>
+        UnitOfWork.RunAsync(factory, async db =>
+        {
+            var m = await access.LoadAsync(db, id, ct);
+            m.Require(PanelRole.Facilitator, PanelRole.Observer, PanelRole.Approver);
+            var e = (await composer.ComposeAsync(db, m.Evaluation, ct)).Evaluation;
+            var moderated = e.Moderated.ToDictionary(x => (x.Alternative, x.Criterion), x => x.Term);
+            var book = new XlsxWorkbook().Sheet("Ratings", "Assessor", "Bidder", "Criterion", "Term", "Rationale", "Declined because", "Moderated term");
+            foreach (var r in e.Ratings)
+            {
+                book.Row(e.Assessors.FirstOrDefault(a => a.Id == r.Assessor)?.Name ?? r.Assessor, e.AlternativeName(r.Alternative),
+                    e.Criteria.FirstOrDefault(c => c.Id == r.Criterion)?.Name ?? r.Criterion, r.Term, r.Rationale, r.Declined,
+                    moderated.GetValueOrDefault((r.Alternative, r.Criterion)));
+            }
+
+            return await Download(db, m.Evaluation, "ratings.exported", "export/ratings.xlsx", FileName(m.Evaluation, "-ratings.xlsx"), XlsxType, book.ToBytes(), ct);
+        }, ct);
+
+    /// <summary>
+    /// Who reads which application in a round, as an .xlsx workbook: one sheet per reviewer's list, one per
+    /// application's readers (facilitator, observer, approver).
+    /// </summary>
+    public Task<DownloadFile> AssignmentXlsxAsync(Guid id, CancellationToken ct = default) =>
+        UnitOfWork.RunAsync(factory, async db =>
+        {
+            var m = await access.LoadAsync(db, id, ct);
+            m.Require(PanelRole.Facilitator, PanelRole.Observer, PanelRole.Approver);
+            var e = (await composer.ComposeAsync(db, m.Evaluation, ct)).Evaluation;
+            if (e.Reviews is not { } design)
+            {
+                throw DomainProblem.Stage($"Evaluation {m.Evaluation.Reference} is not a round: its plan has every assessor rate every bid.");
+            }
+
+            var book = new XlsxWorkbook().Sheet("Reviewers", "Code", "Reviewer", "Fields", "Reads", "Applications");
+            foreach (var a in e.Assessors)
+            {
+                var mine = design.ApplicationsOf(a.Id);
+                book.Row(a.Id, a.Name, string.Join(", ", a.Topics ?? []), mine.Count, string.Join(", ", mine.Select(e.AlternativeName)));
+            }
+
+            book.Sheet("Applications", "Code", "Application", "Field", "Requested", "Read by");
+            foreach (var alt in e.Alternatives)
+            {
+                book.Row(alt.Id, alt.Name, alt.Topic, alt.Requested, string.Join(", ", design.ReviewersOf(alt.Id).Select(r => e.Assessors.FirstOrDefault(x => x.Id == r)?.Name ?? r)));
+            }
+
+            return await Download(db, m.Evaluation, "assignment.exported", "export/assignment.xlsx", FileName(m.Evaluation, "-assignment.xlsx"), XlsxType, book.ToBytes(), ct);
+        }, ct);
+
+    /// <summary>
+    /// The ranking as an .xlsx workbook: rank, bidder, closeness, d+ and d−, and in a round the bands and the funding
+    /// line on a second sheet (the results' roles and stages).
+    /// </summary>
+    public Task<DownloadFile> ResultsXlsxAsync(Guid id, CancellationToken ct = default) =>
+        UnitOfWork.RunAsync(factory, async db =>
+        {
+            var m = await access.LoadAsync(db, id, ct);
+            ResultsService.RequireResultsVisible(m, "export the results");
+            ResultsService.RequirePricesOpen(m, "export the ranking");
+            var e = (await composer.ComposeAsync(db, m.Evaluation, ct)).Evaluation;
+            ResultsService.RequireEveryPrice(m.Evaluation, e, "export the ranking");
+            var run = e.Reviews is not null || e.Funding is not null ? DecisionRun.Of(e, new Core.Robustness.RobustnessOptions(2000)) : DecisionRun.Of(e);
+            var book = new XlsxWorkbook().Sheet("Ranking", "Rank", "Code", "Bidder", "Closeness", "d+", "d−", "Not ranked because");
+            foreach (var r in run.Analysis.Ranking)
+            {
+                book.Row(r.Rank, r.Alternative, e.AlternativeName(r.Alternative), r.Closeness, r.DPlus, r.DMinus, null);
+            }
+
+            foreach (var x in run.Analysis.Excluded)
+            {
+                book.Row(null, x.Alternative, e.AlternativeName(x.Alternative), null, null, null, x.Gates.Count > 0 ? "failed " + string.Join(", ", x.Gates) : x.Reason);
+            }
+
+            if (run.Round is { } round)
+            {
+                var bands = round.Bands.SelectMany(b => b.Alternatives.Select(a => (a, b.Number))).ToDictionary(x => x.a, x => x.Number);
+                var intervals = round.Intervals.ToDictionary(i => i.Alternative);
+                var decisions = round.Funding?.Decisions.ToDictionary(d => d.Alternative);
+                book.Sheet("Bands and funding", "Place", "Code", "Application", "Band", "Best likely place", "Worst likely place", "Requested", "Funded");
+                foreach (var (a, i) in round.Order.Select((a, i) => (a, i)))
+                {
+                    var d = decisions?.GetValueOrDefault(a);
+                    book.Row(i + 1, a, e.AlternativeName(a), bands.TryGetValue(a, out var b) ? b : null,
+                        intervals.TryGetValue(a, out var iv) ? iv.Best : null, intervals.TryGetValue(a, out var iw) ? iw.Worst : null,
+                        d?.Requested, d is null ? null : d.Funded ? "funded" : d.PassedOver ? "passed over" : "not funded");
+                }
+            }
+
+            return await Download(db, m.Evaluation, "results.exported", "export/results.xlsx", FileName(m.Evaluation, "-results.xlsx"), XlsxType, book.ToBytes(), ct);
+        }, ct);
+
     /// <summary>
     /// The ranking (rank, bidder, closeness, d+, d−), then the bidders excluded by a gate; with the results' roles and
     /// stages (from moderation on).
@@ -262,6 +354,8 @@ public sealed partial class ExchangeService(
             return EvaluationStore.Summarise(stored, [.. stored.Panel.Where(p => p.UserId == user.Id).Select(p => p.Role)]);
         }, ct);
     }
+
+    private const string XlsxType = "application/vnd.openxmlformats-officedocument.spreadsheetml.sheet";
 
     private async Task<DownloadFile> Download(
         DecideDbContext db, StoredEvaluation e, string action, string target, string fileName, string contentType, byte[] content, CancellationToken ct)
