@@ -608,6 +608,29 @@ public static class EvaluationValidator
             var criterionAt = Positions(_criteria.Values.Where(c => c.Kind == CriterionKind.Linguistic).Select(c => c.Id));
             int n = alternativeAt.Count, m = criterionAt.Count;
             var cells = new Rating?[assessorAt.Count * n * m];
+
+            // In a round, who reads what as a table of the same positions (null: every assessor reads every bid).
+            bool[]? reads = null;
+            if (e.Reviews is { } design)
+            {
+                reads = new bool[assessorAt.Count * n];
+                foreach (var reviewer in design.Assigned)
+                {
+                    if (!assessorAt.TryGetValue(reviewer.Assessor, out var x))
+                    {
+                        continue;
+                    }
+
+                    foreach (var alternative in reviewer.Alternatives)
+                    {
+                        if (alternativeAt.TryGetValue(alternative, out var i))
+                        {
+                            reads[(x * n) + i] = true;
+                        }
+                    }
+                }
+            }
+
             foreach (var rating in e.Ratings)
             {
                 string At() => JsonPath.Keys("$.ratings", rating.Assessor, rating.Alternative, rating.Criterion);
@@ -640,7 +663,7 @@ public static class EvaluationValidator
                     continue;
                 }
 
-                if (e.Reviews is { } design && !design.IsAssigned(rating.Assessor, rating.Alternative))
+                if (reads is not null && !reads[(a * n) + i])
                 {
                     Add(At(), $"application \"{rating.Alternative}\" is not assigned to reviewer \"{rating.Assessor}\"; in this round they rate only the applications assigned to them");
                     continue;
@@ -687,7 +710,7 @@ public static class EvaluationValidator
                     List<string>? declined = null;
                     for (var k = 0; k < rates.Length; k++)
                     {
-                        if (!rates[k] || e.Reviews?.IsAssigned(e.Assessors[k].Id, alternative.Id) == false)
+                        if (!rates[k] || (reads is not null && (numberOf[k] < 0 || i < 0 || !reads[(numberOf[k] * n) + i])))
                         {
                             continue; // not theirs to rate: nothing is expected, and nothing is imputed
                         }

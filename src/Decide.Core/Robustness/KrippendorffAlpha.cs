@@ -127,28 +127,24 @@ public static class KrippendorffAlpha
     }
 
     /// <summary>The distinct values and, per pairable unit, how often each value was given.</summary>
-    private sealed class Data(double[] values, int[][] counts)
+    private sealed class Data
     {
-        private readonly double[] _values = values;
-        private readonly int[][] _counts = counts;
+        private readonly double[] _values;
+        private readonly int[][] _counts;
 
-        public int[] AllUnits() => Enumerable.Range(0, _counts.Length).ToArray();
+        // Per unit, its non-zero coincidences as (cell a·v + b, pairs ∕ (m − 1)): a unit of three ratings has at most
+        // nine, so a bootstrap resample adds a few numbers per unit instead of a v × v table.
+        private readonly (int Cell, double Weight)[][] _coincidences;
 
-        public int Pairable(int[] units) => units.Sum(u => _counts[u].Sum());
-
-        public double? Alpha(AlphaMetric metric, int[] units)
+        public Data(double[] values, int[][] counts)
         {
-            var v = _values.Length;
-            var o = new double[v * v];
-            foreach (var u in units)
+            _values = values;
+            _counts = counts;
+            var v = values.Length;
+            _coincidences = counts.Select(c =>
             {
-                var c = _counts[u];
-                var m = 0;
-                foreach (var x in c)
-                {
-                    m += x;
-                }
-
+                var m = c.Sum();
+                var list = new List<(int, double)>();
                 for (var a = 0; a < v; a++)
                 {
                     if (c[a] == 0)
@@ -160,8 +156,30 @@ public static class KrippendorffAlpha
                     {
                         // Pairs of values within the unit, each ordered pair of different coders once.
                         var pairs = a == b ? c[a] * (c[a] - 1) : c[a] * c[b];
-                        o[(a * v) + b] += pairs / (double)(m - 1);
+                        if (pairs > 0)
+                        {
+                            list.Add(((a * v) + b, pairs / (double)(m - 1)));
+                        }
                     }
+                }
+
+                return list.ToArray();
+            }).ToArray();
+        }
+
+        public int[] AllUnits() => Enumerable.Range(0, _counts.Length).ToArray();
+
+        public int Pairable(int[] units) => units.Sum(u => _counts[u].Sum());
+
+        public double? Alpha(AlphaMetric metric, int[] units)
+        {
+            var v = _values.Length;
+            var o = new double[v * v];
+            foreach (var u in units)
+            {
+                foreach (var (cell, weight) in _coincidences[u])
+                {
+                    o[cell] += weight;
                 }
             }
 
