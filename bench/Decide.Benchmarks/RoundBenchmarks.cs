@@ -53,7 +53,11 @@ public class RoundBenchmarks
     [Benchmark]
     public PanelReliability? Alpha() => PanelAgreement.Reliability(_prepared);
 
-    /// <summary>The whole run the results screen and the record ask for: analysis and robustness with 10,000 draws.</summary>
+    /// <summary>The whole run the results screen and the record ask for: analysis and robustness with 10,000 draws, one thread.</summary>
     [Benchmark]
     public DecisionRun Robustness() => DecisionRun.Of(_round, new RobustnessOptions(10_000));
+
+    /// <summary>The same on every processor, as the record and the command line run it (<c>Environment.ProcessorCount</c>).</summary>
+    [Benchmark]
+    public DecisionRun RobustnessAllProcessors() => DecisionRun.Of(_round, new RobustnessOptions(10_000, Threads: Environment.ProcessorCount));
 }
