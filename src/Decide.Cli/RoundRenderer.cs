@@ -64,6 +64,12 @@ internal static class RoundRenderer
             output.WriteLine($"  Without {who} (who rated {effect.Read}), {Name(effect.LargestMove!)} moves from place {effect.From} to {effect.To}.");
         }
 
+        if (round.Calibrated is { } calibrated)
+        {
+            output.WriteLine(string.Create(CultureInfo.InvariantCulture,
+                $"  Calibrated beside the raw ranking (each reviewer's terms moved to the panel's mean {calibrated.PanelMean:0.00} and spread {calibrated.PanelSpread:0.00} on the scale): first {Name(calibrated.Order.FirstOrDefault() ?? "-")}, tau-b with the raw order {(calibrated.KendallTau is { } tau ? tau.ToString("0.000", CultureInfo.InvariantCulture) : "undefined")}{(calibrated.FundingChanges.Count > 0 ? $"; funding would differ for {string.Join(", ", calibrated.FundingChanges.Select(Name))}" : "")}. The raw ranking stays the panel's result."));
+        }
+
         if (agreement?.Reliability is { } reliability)
         {
             foreach (var alpha in new[] { reliability.Ordinal, reliability.Interval }.OfType<AlphaEstimate>())

@@ -152,6 +152,11 @@ public static class EvaluationFileWriter
             w.WriteStartObject("reviews");
             w.WriteNumber("reviewersPerApplication", reviews.ReviewersPerApplication);
             w.WriteNumber("maxLoad", reviews.MaxLoad);
+            if (reviews.Calibration != ReviewerCalibration.None)
+            {
+                w.WriteString("calibration", FormatWords.Of(reviews.Calibration));
+            }
+
             w.WriteStartObject("assigned");
             foreach (var reviewer in reviews.Assigned)
             {

@@ -22,6 +22,13 @@ public static class FormatWords
     public static IReadOnlyList<(string Name, WeightingMethod Value)> Weightings { get; } =
         [("importance", WeightingMethod.Importance), ("pairwise", WeightingMethod.Pairwise), ("points", WeightingMethod.Points)];
 
+    /// <summary>Reviewer calibration of a round.</summary>
+    public static IReadOnlyList<(string Name, Decide.Core.Model.ReviewerCalibration Value)> Calibrations { get; } =
+        [("none", Decide.Core.Model.ReviewerCalibration.None), ("standardise", Decide.Core.Model.ReviewerCalibration.Standardise)];
+
+    /// <summary>The file's word for a reviewer calibration.</summary>
+    public static string Of(Decide.Core.Model.ReviewerCalibration value) => Word(Calibrations, value);
+
     /// <summary>Rules of a round's funding line.</summary>
     public static IReadOnlyList<(string Name, Decide.Core.Model.FundingRule Value)> FundingRules { get; } =
         [("stop-at-first-unaffordable", Decide.Core.Model.FundingRule.StopAtFirstUnaffordable), ("skip-unaffordable", Decide.Core.Model.FundingRule.SkipUnaffordable)];

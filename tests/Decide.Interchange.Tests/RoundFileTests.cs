@@ -85,3 +85,32 @@ public sealed class RoundFileTests
         Assert.Contains("\"Ashby Lane Seed Library\" needs the amount it requests", error.Reason);
     }
 }
+
+public sealed class RoundCalibrationFileTests
+{
+    [Fact]
+    public void Calibration_reads_writes_back_and_appears_in_the_results_beside_the_raw_order()
+    {
+        var sample = JsonNode.Parse(File.ReadAllText(RepositoryFiles.PathOf("samples", "community-grants-round.json")))!.AsObject();
+        sample["reviews"]!.AsObject()["calibration"] = "standardise";
+        var file = EvaluationFileReader.Read(sample.ToJsonString());
+        Assert.Equal(ReviewerCalibration.Standardise, file.Evaluation.Reviews!.Calibration);
+        Assert.Contains("\"calibration\": \"standardise\"", EvaluationFileWriter.ToJson(file), StringComparison.Ordinal);
+
+        var document = ResultsWriter.CreateDocument(DecisionRun.Of(file.Evaluation), file.Evaluation);
+        var calibrated = document.Round!.Calibrated!;
+        Assert.Equal(12, calibrated.Order.Count);
+        Assert.Equal(6, calibrated.Reviewers.Count);
+        Assert.Equal(document.Ranking.Select(r => r.Alternative), document.Round.Order); // the round follows the raw ranking
+        Schemas.AssertValid(Schemas.Evaluation, EvaluationFileWriter.ToJson(file));
+        Schemas.AssertValid(Schemas.Results, ResultsWriter.ToJson(document));
+    }
+
+    [Fact]
+    public void An_unknown_calibration_is_refused_with_the_words_it_takes()
+    {
+        var sample = JsonNode.Parse(File.ReadAllText(RepositoryFiles.PathOf("samples", "community-grants-round.json")))!.AsObject();
+        var error = Files.ErrorsOf(sample.Set("reviews/calibration", "\"z-scores\"")).At("$.reviews.calibration");
+        Assert.Contains("\"standardise\"", error.Reason);
+    }
+}

@@ -8,7 +8,12 @@ namespace Decide.Core.Model;
 /// <param name="ReviewersPerApplication">k: how many reviewers read each application; 1 or more.</param>
 /// <param name="MaxLoad">The most applications one reviewer may be given; 1 or more.</param>
 /// <param name="Assigned">Per reviewer, the applications they read (the proposal the facilitator accepted or edited).</param>
-public sealed record ReviewDesign(int ReviewersPerApplication, int MaxLoad, IReadOnlyList<ReviewAssignment> Assigned)
+/// <param name="Calibration">
+/// Whether a ranking with each reviewer's terms standardised is shown beside the raw one (never in its place); off
+/// by default.
+/// </param>
+public sealed record ReviewDesign(
+    int ReviewersPerApplication, int MaxLoad, IReadOnlyList<ReviewAssignment> Assigned, ReviewerCalibration Calibration = ReviewerCalibration.None)
 {
     /// <summary>True when reviewer <paramref name="assessor"/> is assigned application <paramref name="alternative"/>.</summary>
     public bool IsAssigned(string assessor, string alternative) => Lookup().Contains((assessor, alternative));
@@ -34,6 +39,20 @@ public sealed record ReviewDesign(int ReviewersPerApplication, int MaxLoad, IRea
 /// <param name="Assessor">Assessor id.</param>
 /// <param name="Alternatives">The applications (alternative ids) they read.</param>
 public sealed record ReviewAssignment(string Assessor, IReadOnlyList<string> Alternatives);
+
+/// <summary>Whether reviewers' habits (a hard or a lenient marker) are corrected in a second ranking shown beside the raw one.</summary>
+public enum ReviewerCalibration
+{
+    /// <summary>No second ranking (the default).</summary>
+    None,
+
+    /// <summary>
+    /// Each reviewer's terms are standardised: a term's position on the scale is moved so that the reviewer's mean
+    /// and spread of positions become the whole panel's, and the ranking of the moved terms is shown beside the raw
+    /// one.
+    /// </summary>
+    Standardise,
+}
 
 /// <summary>How a round's budget is spent down the ranking.</summary>
 public enum FundingRule

@@ -27,13 +27,15 @@ public sealed record ReviewerEffect(string Assessor, int Read, string? LargestMo
 /// <param name="Bands">Bands the draws cannot put in order (empty until robustness is run).</param>
 /// <param name="Flips">Applications whose funding decision a robustness check changes (empty without a funding line or robustness).</param>
 /// <param name="Reviewers">Leave-one-reviewer-out on the applications each reviewer read (empty without an incomplete design or robustness).</param>
+/// <param name="Calibrated">The ranking with reviewers' terms standardised, shown beside the raw one, when the plan asks for it; else null.</param>
 public sealed record RoundReport(
     IReadOnlyList<string> Order,
     FundingResult? Funding,
     IReadOnlyList<RankInterval> Intervals,
     IReadOnlyList<ScoreBand> Bands,
     IReadOnlyList<FundingFlip> Flips,
-    IReadOnlyList<ReviewerEffect> Reviewers);
+    IReadOnlyList<ReviewerEffect> Reviewers,
+    CalibratedRanking? Calibrated = null);
 
 /// <summary>
 /// Shortlists, bands and the funding line of a round (issue "lots and large rounds", item 4), from the analysis and,
@@ -56,16 +58,17 @@ public static class RoundAnalysis
         var requested = source.Alternatives.ToDictionary(a => a.Id, a => a.Requested ?? 0, StringComparer.Ordinal);
         var funding = source.Funding is { } plan ? FundingLine.Draw(order, id => requested[id], plan) : null;
         var ids = order.Select(o => o.Id).ToArray();
+        var calibrated = source.Reviews is { Calibration: ReviewerCalibration.Standardise } ? Calibration.Rank(prepared, analysis, funding) : null;
         if (robustness is null)
         {
-            return new RoundReport(ids, funding, [], [], [], []);
+            return new RoundReport(ids, funding, [], [], [], [], calibrated);
         }
 
         var intervals = ScoreBands.Intervals(robustness.Sensitivity.Acceptability);
         var bands = ScoreBands.Of(ids, intervals);
         var flips = funding is null ? [] : Flips(source, funding, intervals, robustness.Sensitivity.LeaveOneOut, id => requested[id]);
         var reviewers = source.Reviews is null ? [] : Reviewers(prepared, ids, robustness.Sensitivity.LeaveOneOut);
-        return new RoundReport(ids, funding, intervals, bands, flips, reviewers);
+        return new RoundReport(ids, funding, intervals, bands, flips, reviewers, calibrated);
     }
 
     private static (string Id, double Score)[] Order(AnalysisResult analysis, AwardReport? award) =>

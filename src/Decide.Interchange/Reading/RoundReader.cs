@@ -11,7 +11,7 @@ namespace Decide.Interchange.Reading;
 /// </summary>
 internal sealed class RoundReader(ReadContext context, PathTranslator paths)
 {
-    private static readonly string[] ReviewMembers = ["reviewersPerApplication", "maxLoad", "assigned"];
+    private static readonly string[] ReviewMembers = ["reviewersPerApplication", "maxLoad", "assigned", "calibration"];
     private static readonly string[] FundingMembers = ["budget", "rule", "currency"];
 
     /// <summary>The review design, or null when every assessor rates every alternative.</summary>
@@ -46,7 +46,8 @@ internal sealed class RoundReader(ReadContext context, PathTranslator paths)
             }
         }
 
-        return new ReviewDesign(k, load, assigned);
+        var calibration = f.Choice("calibration", FormatWords.Calibrations, ReviewerCalibration.None, out _);
+        return new ReviewDesign(k, load, assigned, calibration);
     }
 
     /// <summary>The funding line, or null when the round has none.</summary>

@@ -56,7 +56,11 @@ internal static class RobustnessSections
             : null,
         r.Bands.Select(b => new BandEntry(b.Number, b.Alternatives.ToArray(), b.Best, b.Worst)).ToArray(),
         r.Flips.Select(x => new FundingFlipEntry(x.Alternative, x.FundedNow, x.Because.ToArray())).ToArray(),
-        r.Reviewers.Select(x => new ReviewerEffectEntry(x.Assessor, x.Read, x.LargestMove, x.From, x.To, x.Problem)).ToArray());
+        r.Reviewers.Select(x => new ReviewerEffectEntry(x.Assessor, x.Read, x.LargestMove, x.From, x.To, x.Problem)).ToArray(),
+        r.Calibrated is { } c
+            ? new CalibratedEntry(c.Order.ToArray(), c.Closeness.ToArray(), c.KendallTau, c.PanelMean, c.PanelSpread,
+                c.Reviewers.Select(h => new ReviewerHabitEntry(h.Assessor, h.Rated, h.Mean, h.Spread)).ToArray(), c.FundingChanges.ToArray())
+            : null);
 
     private static CriticalChangesEntry CriticalChanges(CriticalChangesResult c) => new(
         c.Changes.Select(x => new CriticalChangeEntry(

@@ -11,12 +11,22 @@ namespace Decide.Interchange.Results;
 /// <param name="Bands">Bands from the 95% rank intervals, best first.</param>
 /// <param name="Flips">Applications whose funding decision a robustness check changes.</param>
 /// <param name="Reviewers">Leave-one-reviewer-out on the applications each read.</param>
+/// <param name="Calibrated">The ranking with reviewers' terms standardised, beside the raw one, when the plan asks for it.</param>
 public sealed record RoundSection(
     IReadOnlyList<string> Order,
     FundingEntry? Funding,
     IReadOnlyList<BandEntry> Bands,
     IReadOnlyList<FundingFlipEntry> Flips,
-    IReadOnlyList<ReviewerEffectEntry> Reviewers);
+    IReadOnlyList<ReviewerEffectEntry> Reviewers,
+    CalibratedEntry? Calibrated = null);
+
+/// <summary>The calibrated ranking: order, closeness, tau-b with the raw closeness, the habits it corrected and the funding changes.</summary>
+public sealed record CalibratedEntry(
+    IReadOnlyList<string> Order, IReadOnlyList<double> Closeness, double? KendallTau, double PanelMean, double PanelSpread,
+    IReadOnlyList<ReviewerHabitEntry> Reviewers, IReadOnlyList<string> FundingChanges);
+
+/// <summary>One reviewer's mean and spread of positions on the scale.</summary>
+public sealed record ReviewerHabitEntry(string Assessor, int Rated, double Mean, double Spread);
 
 /// <summary>The funding line: budget, rule, what is spent, and one decision per ranked application.</summary>
 public sealed record FundingEntry(

@@ -63,6 +63,9 @@ public sealed class PlanDraft
     /// <summary>The most applications one reviewer may be given in a round.</summary>
     public int MaxLoad { get; set; } = 20;
 
+    /// <summary>True to show a ranking with each reviewer's terms standardised beside the raw one.</summary>
+    public bool Calibrate { get; set; }
+
     /// <summary>The round's budget, or null for no funding line.</summary>
     public double? Budget { get; set; }
 
@@ -113,6 +116,7 @@ public sealed class PlanDraft
             Round = read.Reviews is not null,
             ReviewersPerApplication = read.Reviews?.ReviewersPerApplication ?? 3,
             MaxLoad = read.Reviews?.MaxLoad ?? 20,
+            Calibrate = read.Reviews?.Calibration == ReviewerCalibration.Standardise,
             Budget = read.Funding?.Budget,
             FundingRule = read.Funding?.Rule ?? FundingRule.StopAtFirstUnaffordable,
             Currency = read.Funding?.Currency,
@@ -168,7 +172,7 @@ public sealed class PlanDraft
                 .ToDictionary(c => c.Id, c => c.MinimumTerm!, StringComparer.Ordinal))
             : null,
         Options = new AnalysisOptions(Aggregation, Ideal, DivergenceTolerance, AcceptabilityWeights),
-        Reviews = Round ? new ReviewDesign(ReviewersPerApplication, MaxLoad, []) : null,
+        Reviews = Round ? new ReviewDesign(ReviewersPerApplication, MaxLoad, [], Calibrate ? ReviewerCalibration.Standardise : ReviewerCalibration.None) : null,
         Funding = Budget is { } budget ? new FundingPlan(budget, FundingRule, string.IsNullOrWhiteSpace(Currency) ? null : Currency.Trim()) : null,
     };
 
