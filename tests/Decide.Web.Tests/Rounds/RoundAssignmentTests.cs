@@ -79,6 +79,12 @@ public sealed class RoundAssignmentTests(DecideWebFactory factory) : IClassFixtu
 
         await s.CompleteSheetAsync(s.Ashby);
         await s.CompleteSheetAsync(s.Brook);
+
+        // The board counts each reviewer's own cells: Brook two applications × his two criteria, Ashby three × three.
+        var board = await ApiAssert.OkAsync(await s.Facilitator.GetAsync(s.Url("/progress")));
+        var rows = board.GetProperty("assessors").EnumerateArray().ToDictionary(a => a.GetProperty("assessorCode").GetString()!);
+        Assert.Equal((4, 4), (rows[ScenarioBuilder.Brook].GetProperty("ratingsDone").GetInt32(), rows[ScenarioBuilder.Brook].GetProperty("ratingsTotal").GetInt32()));
+        Assert.Equal((9, 9), (rows[ScenarioBuilder.Ashby].GetProperty("ratingsDone").GetInt32(), rows[ScenarioBuilder.Ashby].GetProperty("ratingsTotal").GetInt32()));
         await ApiAssert.OkAsync(await s.Facilitator.PostJsonAsync(s.Url("/start-moderation"), new { version = await s.VersionAsync() }));
 
         var results = await ApiAssert.OkAsync(await s.Observer.GetAsync(s.Url("/results?draws=300")));
@@ -95,6 +101,16 @@ public sealed class RoundAssignmentTests(DecideWebFactory factory) : IClassFixtu
     {
         using var s = await new ScenarioBuilder(factory).BuildAsync();
         await ApiAssert.ProblemAsync(await s.Facilitator.PostJsonAsync(s.Url("/assignment/propose"), new { }), HttpStatusCode.Conflict, "is not a round");
+    }
+
+    [Fact]
+    public async Task A_proposal_that_cannot_be_met_says_how_many_reviewers_are_missing()
+    {
+        // Three bids, two reviewers who may read one each: 3 × 1 reviews needed, 2 available.
+        using var s = await new ScenarioBuilder(factory).WithRound(k: 1, maxLoad: 1, budget: 65_000).BuildAsync(EvaluationStage.PlanLocked);
+        var problem = await ApiAssert.ProblemAsync(await s.Facilitator.PostJsonAsync(s.Url("/assignment/propose"), new { }), HttpStatusCode.BadRequest);
+        ApiAssert.HasError(problem, "assignment", "1 more reviewer is missing");
+        Assert.Empty(await s.AuditEntriesAsync("assignment.proposed"));
     }
 
     private static JsonElement Reviewer(JsonElement view, string code) =>

@@ -37,6 +37,11 @@ public sealed class ScoringBoardService(IDbContextFactory<DecideDbContext> facto
         var judgements = plan.Weighting == WeightingMethod.Pairwise
             ? await db.WeightJudgements.AsNoTracking().Where(w => w.EvaluationId == id && w.Kind == WeightJudgement.PairwiseKind).OrderBy(w => w.Id).ToListAsync(ct)
             : [];
+        // In a round, each reviewer is expected to rate only the applications assigned to them.
+        var reads = plan.Reviews is null
+            ? null
+            : (await db.ReviewAssignments.AsNoTracking().Where(r => r.EvaluationId == id).Select(r => new { r.AssessorCode, r.AlternativeCode }).ToListAsync(ct))
+                .GroupBy(r => r.AssessorCode).ToDictionary(g => g.Key, g => g.Select(r => r.AlternativeCode).ToHashSet(StringComparer.Ordinal), StringComparer.Ordinal);
         var userIds = m.Evaluation.Panel.Select(p => p.UserId).Distinct().ToArray();
         var names = await db.Users.AsNoTracking().Where(u => userIds.Contains(u.Id)).ToDictionaryAsync(u => u.Id, u => u.DisplayName, ct);
 
@@ -45,14 +50,15 @@ public sealed class ScoringBoardService(IDbContextFactory<DecideDbContext> facto
         {
             var code = seat.AssessorCode ?? "";
             var assigned = (EvaluationComposer.Assigned(seat) ?? linguistic).Where(linguistic.Contains).ToHashSet(StringComparer.Ordinal);
-            var ratingsDone = done.Count(r => r.AssessorCode == code && scored.Contains(r.AlternativeCode) && assigned.Contains(r.CriterionId));
+            var theirs = reads is null ? scored : scored.Where(a => reads.GetValueOrDefault(code)?.Contains(a) == true).ToHashSet(StringComparer.Ordinal);
+            var ratingsDone = done.Count(r => r.AssessorCode == code && theirs.Contains(r.AlternativeCode) && assigned.Contains(r.CriterionId));
             var matrices = plan.Weighting == WeightingMethod.Pairwise
                 ? WeightStructure.Matrices(plan).Select(x => Consistency(plan, x.Group, x.Items, judgements.Where(j => j.AssessorCode == code))).ToArray()
                 : null;
             assessors.Add(new AssessorProgress(
                 code, names.GetValueOrDefault(seat.UserId, code), seat.DeclarationSignedAt, seat.DeclarationVersion, seat.NamesConfirmedAt,
                 seat.WeightsSubmittedAt, matrices, matrices?.Any(x => x.Flagged) == true,
-                ratingsDone, scored.Count * assigned.Count, seat.SubmittedAt));
+                ratingsDone, theirs.Count * assigned.Count, seat.SubmittedAt));
         }
 
         var valuesEntered = values.Count(v => scored.Contains(v.AlternativeCode) && numeric.Contains(v.CriterionId));
