@@ -60,18 +60,13 @@ public sealed class DemoSeeder(
         var facilitator = await Account($"facilitator@{Domain}", "Ione Castellane (Procurement Officer, facilitator)");
         var observer = await Account($"probity@{Domain}", "Wendell Saxby (Probity Observer)");
         var approver = await Account($"director@{Domain}", "Priya Marchetti (Director of Operations, approver)");
-        var accounts = new Dictionary<string, string>(StringComparer.Ordinal);
-        foreach (var assessor in file.Evaluation.Assessors)
-        {
-            accounts[assessor.Id] = (await Account($"{assessor.Id}@{Domain}", assessor.Name)).Id;
-        }
+        var accounts = await PanelAccountsAsync(file, Domain);
 
         var now = clock.GetUtcNow();
         await using var db = await factory.CreateDbContextAsync(ct);
         var stored = EvaluationImporter.Add(db, file, accounts, facilitator.Id, admin.Id, now);
         stored.CreatedAt = now.AddDays(-30);
-        stored.LockPlan(now.AddDays(-20), Convert.ToHexStringLower(SHA256.HashData(Encoding.UTF8.GetBytes(stored.PlanJson))),
-            methodologyHash: Reports.Methodology.MethodologyDocument.Fingerprint(Recordkeeping.MethodologyInputs.From(EvaluationComposer.ReadPlan(stored))));
+        LockPlanAt(stored, now.AddDays(-20));
         stored.OpenScoring(now.AddDays(-12));
         stored.StartModeration(now.AddDays(-1));
         stored.Panel.Add(new PanelMember { UserId = observer.Id, Role = PanelRole.Observer });
@@ -134,17 +129,12 @@ public sealed class DemoSeeder(
         var commercial = await Account($"commercial@{PointsDomain}", "Bram Ellery (Commercial Officer, price evaluator)");
         var observer = await Account($"audit@{PointsDomain}", "Nia Trevelyan (Internal Audit, observer)");
         var approver = await Account($"head.parks@{PointsDomain}", "Caspar Holm (Head of Parks, approver)");
-        var accounts = new Dictionary<string, string>(StringComparer.Ordinal);
-        foreach (var assessor in file.Evaluation.Assessors)
-        {
-            accounts[assessor.Id] = (await Account($"{assessor.Id}@{PointsDomain}", assessor.Name)).Id;
-        }
+        var accounts = await PanelAccountsAsync(file, PointsDomain);
 
         await using var db = await factory.CreateDbContextAsync(ct);
         var stored = EvaluationImporter.Add(db, file, accounts, facilitator.Id, admin.Id, now);
         stored.CreatedAt = now.AddDays(-40);
-        stored.LockPlan(now.AddDays(-30), Convert.ToHexStringLower(SHA256.HashData(Encoding.UTF8.GetBytes(stored.PlanJson))), pointsAward: true, twoStage: true,
-            Reports.Methodology.MethodologyDocument.Fingerprint(Recordkeeping.MethodologyInputs.From(EvaluationComposer.ReadPlan(stored))));
+        LockPlanAt(stored, now.AddDays(-30), pointsAward: true, twoStage: true);
         stored.OpenScoring(now.AddDays(-14));
         stored.StartModeration(now.AddDays(-2));
         stored.Panel.Add(new PanelMember { UserId = commercial.Id, Role = PanelRole.PriceEvaluator, AssessorCode = "commercial" });
@@ -173,17 +163,12 @@ public sealed class DemoSeeder(
         var file = EvaluationFileReader.ReadFile(SamplePath(RoundDemoFile));
         var facilitator = await Account($"grants@{RoundDomain}", "Hollis Brightwater (Grants Manager, facilitator)");
         var observer = await Account($"trustees@{RoundDomain}", "Maud Penhallow (Chair of Trustees, observer)");
-        var accounts = new Dictionary<string, string>(StringComparer.Ordinal);
-        foreach (var reviewer in file.Evaluation.Assessors)
-        {
-            accounts[reviewer.Id] = (await Account($"{reviewer.Id}@{RoundDomain}", reviewer.Name)).Id;
-        }
+        var accounts = await PanelAccountsAsync(file, RoundDomain);
 
         await using var db = await factory.CreateDbContextAsync(ct);
         var stored = EvaluationImporter.Add(db, file, accounts, facilitator.Id, admin.Id, now);
         stored.CreatedAt = now.AddDays(-35);
-        stored.LockPlan(now.AddDays(-28), Convert.ToHexStringLower(SHA256.HashData(Encoding.UTF8.GetBytes(stored.PlanJson))),
-            methodologyHash: Reports.Methodology.MethodologyDocument.Fingerprint(Recordkeeping.MethodologyInputs.From(EvaluationComposer.ReadPlan(stored))));
+        LockPlanAt(stored, now.AddDays(-28));
         stored.OpenScoring(now.AddDays(-21));
         stored.StartModeration(now.AddDays(-1));
         stored.Panel.Add(new PanelMember { UserId = observer.Id, Role = PanelRole.Observer });
@@ -201,6 +186,23 @@ public sealed class DemoSeeder(
         await db.SaveChangesAsync(ct);
         return stored.Reference;
     }
+
+    /// <summary>An account per assessor of the file, at the demo's domain: assessor code → account id.</summary>
+    private async Task<Dictionary<string, string>> PanelAccountsAsync(EvaluationFile file, string domain)
+    {
+        var accounts = new Dictionary<string, string>(StringComparer.Ordinal);
+        foreach (var assessor in file.Evaluation.Assessors)
+        {
+            accounts[assessor.Id] = (await Account($"{assessor.Id}@{domain}", assessor.Name)).Id;
+        }
+
+        return accounts;
+    }
+
+    /// <summary>Locks a seeded plan as the lifecycle would: its SHA-256 and the fingerprint of its methodology.</summary>
+    private static void LockPlanAt(StoredEvaluation stored, DateTimeOffset at, bool pointsAward = false, bool twoStage = false) =>
+        stored.LockPlan(at, Convert.ToHexStringLower(SHA256.HashData(Encoding.UTF8.GetBytes(stored.PlanJson))), pointsAward, twoStage,
+            Reports.Methodology.MethodologyDocument.Fingerprint(Recordkeeping.MethodologyInputs.From(EvaluationComposer.ReadPlan(stored))));
 
     private string SamplePath(string name)
     {

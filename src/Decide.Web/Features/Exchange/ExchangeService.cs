@@ -117,11 +117,7 @@ public sealed partial class ExchangeService(
     public Task<DownloadFile> ResultsXlsxAsync(Guid id, CancellationToken ct = default) =>
         UnitOfWork.RunAsync(factory, async db =>
         {
-            var m = await access.LoadAsync(db, id, ct);
-            ResultsService.RequireResultsVisible(m, "export the results");
-            ResultsService.RequirePricesOpen(m, "export the ranking");
-            var e = (await composer.ComposeAsync(db, m.Evaluation, ct)).Evaluation;
-            ResultsService.RequireEveryPrice(m.Evaluation, e, "export the ranking");
+            var (m, e) = await RankableAsync(db, id, ct);
             var run = e.Reviews is not null || e.Funding is not null ? DecisionRun.Of(e, new Core.Robustness.RobustnessOptions(2000)) : DecisionRun.Of(e);
             var book = new XlsxWorkbook().Sheet("Ranking", "Rank", "Code", "Bidder", "Closeness", "d+", "d−", "Not ranked because");
             foreach (var r in run.Analysis.Ranking)
@@ -159,11 +155,7 @@ public sealed partial class ExchangeService(
     public Task<DownloadFile> ResultsCsvAsync(Guid id, CancellationToken ct = default) =>
         UnitOfWork.RunAsync(factory, async db =>
         {
-            var m = await access.LoadAsync(db, id, ct);
-            ResultsService.RequireResultsVisible(m, "export the results");
-            ResultsService.RequirePricesOpen(m, "export the ranking");
-            var e = (await composer.ComposeAsync(db, m.Evaluation, ct)).Evaluation;
-            ResultsService.RequireEveryPrice(m.Evaluation, e, "export the ranking");
+            var (m, e) = await RankableAsync(db, id, ct);
             var result = DecisionRun.Of(e).Analysis;
             var names = e.Alternatives.ToDictionary(a => a.Id, a => a.Name, StringComparer.Ordinal);
             var csv = new SpreadsheetCsv().Header("rank", "bidder", "name", "closeness", "d_plus", "d_minus", "failed_gates");
@@ -353,6 +345,17 @@ public sealed partial class ExchangeService(
             await db.SaveChangesAsync(ct);
             return EvaluationStore.Summarise(stored, [.. stored.Panel.Where(p => p.UserId == user.Id).Select(p => p.Role)]);
         }, ct);
+    }
+
+    /// <summary>The evaluation whose ranking may be exported: results visible to the caller, prices open and every one entered.</summary>
+    private async Task<(Membership Membership, Core.Model.Evaluation Evaluation)> RankableAsync(DecideDbContext db, Guid id, CancellationToken ct)
+    {
+        var m = await access.LoadAsync(db, id, ct);
+        ResultsService.RequireResultsVisible(m, "export the results");
+        ResultsService.RequirePricesOpen(m, "export the ranking");
+        var e = (await composer.ComposeAsync(db, m.Evaluation, ct)).Evaluation;
+        ResultsService.RequireEveryPrice(m.Evaluation, e, "export the ranking");
+        return (m, e);
     }
 
     private const string XlsxType = "application/vnd.openxmlformats-officedocument.spreadsheetml.sheet";
