@@ -15,9 +15,6 @@ namespace Decide.Core.Model;
 public sealed record ReviewDesign(
     int ReviewersPerApplication, int MaxLoad, IReadOnlyList<ReviewAssignment> Assigned, ReviewerCalibration Calibration = ReviewerCalibration.None)
 {
-    /// <summary>True when reviewer <paramref name="assessor"/> is assigned application <paramref name="alternative"/>.</summary>
-    public bool IsAssigned(string assessor, string alternative) => Lookup().Contains((assessor, alternative));
-
     /// <summary>The applications assigned to <paramref name="assessor"/>, in the order given (empty when none).</summary>
     public IReadOnlyList<string> ApplicationsOf(string assessor) =>
         Assigned.FirstOrDefault(a => a.Assessor == assessor)?.Alternatives ?? [];
@@ -25,14 +22,6 @@ public sealed record ReviewDesign(
     /// <summary>The reviewers assigned to <paramref name="alternative"/>, in the order of <see cref="Assigned"/>.</summary>
     public IReadOnlyList<string> ReviewersOf(string alternative) =>
         Assigned.Where(a => a.Alternatives.Contains(alternative)).Select(a => a.Assessor).ToArray();
-
-    // Keyed by the list itself, not held in a field: a field would take part in the record's equality and be copied
-    // by `with` when the list is replaced.
-    private static readonly System.Runtime.CompilerServices.ConditionalWeakTable<IReadOnlyList<ReviewAssignment>, HashSet<(string, string)>> Lookups = new();
-
-    private HashSet<(string, string)> Lookup() => Lookups.GetValue(Assigned, list => list
-        .SelectMany(a => a.Alternatives.Select(alt => (a.Assessor, alt)))
-        .ToHashSet());
 }
 
 /// <summary>One reviewer's share of a round.</summary>
