@@ -16,8 +16,6 @@ internal static class RoundRenderer
         var e = file.Evaluation;
         var names = e.Alternatives.GroupBy(a => a.Id).ToDictionary(g => g.Key, g => g.First().Name);
         string Name(string id) => names.GetValueOrDefault(id, id);
-        var band = round.Bands.SelectMany(b => b.Alternatives.Select(id => (id, b.Number))).ToDictionary(x => x.id, x => x.Number);
-        var intervals = round.Intervals.ToDictionary(i => i.Alternative);
 
         output.WriteLine();
         output.WriteLine(e.Reviews is { } design
@@ -26,7 +24,7 @@ internal static class RoundRenderer
         if (round.Funding is { } funding)
         {
             var unit = funding.Plan.Currency is { } c ? $" {c}" : "";
-            output.WriteLine($"  Funding line: budget {Money(funding.Plan.Budget)}{unit}, {FundingRuleWords(funding.Plan.Rule)}; {funding.Funded.Count()} funded, {Money(funding.Spent)}{unit} spent.");
+            output.WriteLine($"  Funding line: budget {Money(funding.Plan.Budget)}{unit}, {RoundText.FundingRule(funding.Plan.Rule)}; {funding.Funded.Count()} funded, {Money(funding.Spent)}{unit} spent.");
             if (funding.TiedAcrossTheLine.Count > 0)
             {
                 output.WriteLine($"  The line falls inside a tie: {string.Join(", ", funding.TiedAcrossTheLine.Select(Name))} have the same score; the panel must break it.");
@@ -34,17 +32,16 @@ internal static class RoundRenderer
         }
 
         var table = new TextTable("Place", "Id", "Name", "Band", "Ranks (95%)", "Requested", "Funded").AlignRight(0, 3, 5);
-        foreach (var (id, i) in round.Order.Select((id, i) => (id, i)))
+        foreach (var row in round.Rows())
         {
-            var decision = round.Funding?.Decisions.FirstOrDefault(d => d.Alternative == id);
             table.Add(
-                (i + 1).ToString(CultureInfo.InvariantCulture),
-                id,
-                Name(id),
-                band.TryGetValue(id, out var b) ? b.ToString(CultureInfo.InvariantCulture) : "–",
-                intervals.TryGetValue(id, out var interval) ? $"{interval.Best}–{interval.Worst}" : "–",
-                decision is null ? "–" : Money(decision.Requested),
-                decision is null ? "–" : decision.Funded ? "yes" : decision.PassedOver ? "passed over" : "no");
+                row.Place.ToString(CultureInfo.InvariantCulture),
+                row.Alternative,
+                Name(row.Alternative),
+                row.Band?.ToString(CultureInfo.InvariantCulture) ?? "–",
+                row.Interval is { } interval ? RoundText.Places(interval) : "–",
+                row.Funding is { } decision ? Money(decision.Requested) : "–",
+                row.Funding is { } funded ? RoundText.Decision(funded) : "–");
         }
 
         table.Write(output, "  ");
@@ -84,10 +81,6 @@ internal static class RoundRenderer
             output.WriteLine($"  Kendall's W leaves out {outside.Count} {(outside.Count == 1 ? "assessor" : "assessors")} who did not rate every application: W needs complete rankings.");
         }
     }
-
-    internal static string FundingRuleWords(Decide.Core.Model.FundingRule rule) => rule == Decide.Core.Model.FundingRule.StopAtFirstUnaffordable
-        ? "funded down the ranking until the first application the remaining budget cannot pay in full"
-        : "funded down the ranking, passing over any application the remaining budget cannot pay in full";
 
     private static string Money(double amount) => amount.ToString("#,0.##", CultureInfo.InvariantCulture);
 }

@@ -31,14 +31,11 @@ internal sealed partial class RecordWriter
                 ]));
         }
 
-        var intervals = round.Intervals.ToDictionary(i => i.Alternative);
-        var bands = round.Bands.SelectMany(b => b.Alternatives.Select(id => (id, b.Number))).ToDictionary(x => x.id, x => x.Number);
-        var decisions = round.Funding?.Decisions.ToDictionary(d => d.Alternative);
         _flow.Heading(round.Funding is null ? "Bands" : "Bands and the funding line");
         if (round.Funding is { } funding)
         {
             var unit = funding.Plan.Currency is { } c ? $" {c}" : "";
-            _flow.Paragraph($"Budget {RecordText.Measured(funding.Plan.Budget)}{unit}, {(funding.Plan.Rule == FundingRule.StopAtFirstUnaffordable ? "spent down the ranking until the first application the rest of the budget could not pay in full" : "spent down the ranking, passing over any application the rest of the budget could not pay in full")}: {funding.Funded.Count()} funded for {RecordText.Measured(funding.Spent)}{unit}.");
+            _flow.Paragraph($"Budget {RecordText.Measured(funding.Plan.Budget)}{unit}, {RoundText.FundingRule(funding.Plan.Rule)}: {funding.Funded.Count()} funded for {RecordText.Measured(funding.Spent)}{unit}.");
             if (funding.TiedAcrossTheLine.Count > 0)
             {
                 _flow.Caution("The funding line falls inside a tie", [$"{string.Join(", ", funding.TiedAcrossTheLine.Select(_names.Alternative))} have the same score; the panel decides between them and records why."]);
@@ -52,14 +49,14 @@ internal sealed partial class RecordWriter
 
         _flow.Table(
             [new("Place", 0.9, CellAlign.Right), new("Application", 5), new("Band", 0.9, CellAlign.Right), new("Likely places", 1.6), new("Requested", 1.7, CellAlign.Right), new("Funded", 2)],
-            round.Order.Select((id, i) => (IReadOnlyList<string>)
+            round.Rows().Select(row => (IReadOnlyList<string>)
             [
-                (i + 1).ToString(CultureInfo.InvariantCulture),
-                _names.Alternative(id),
-                bands.TryGetValue(id, out var b) ? b.ToString(CultureInfo.InvariantCulture) : "–",
-                intervals.TryGetValue(id, out var interval) ? (interval.Best == interval.Worst ? $"{interval.Best}" : $"{interval.Best} to {interval.Worst}") : "–",
-                decisions?.GetValueOrDefault(id) is { } d ? RecordText.Measured(d.Requested) : "–",
-                decisions?.GetValueOrDefault(id) is { } e ? (e.Funded ? "funded" : e.PassedOver ? "passed over" : "not funded") : "–",
+                row.Place.ToString(CultureInfo.InvariantCulture),
+                _names.Alternative(row.Alternative),
+                row.Band?.ToString(CultureInfo.InvariantCulture) ?? "–",
+                row.Interval is { } interval ? RoundText.Places(interval) : "–",
+                row.Funding is { } d ? RecordText.Measured(d.Requested) : "–",
+                row.Funding is { } e ? RoundText.Decision(e) : "–",
             ]));
 
         if (round.Flips.Count > 0)

@@ -20,6 +20,32 @@ public sealed record FundingFlip(string Alternative, bool FundedNow, IReadOnlyLi
 /// <param name="Problem">Why no ranking exists without them, else null.</param>
 public sealed record ReviewerEffect(string Assessor, int Read, string? LargestMove, int From, int To, string? Problem);
 
+/// <summary>One place of a round's ranking with what every output prints beside it.</summary>
+/// <param name="Place">1 = best.</param>
+/// <param name="Alternative">The application's id.</param>
+/// <param name="Band">Its band, or null until robustness is run.</param>
+/// <param name="Interval">Its 95% rank interval, or null until robustness is run.</param>
+/// <param name="Funding">Its place against the funding line, or null when there is none.</param>
+/// <param name="LastFunded">True for the last application of the unbroken funded run from the top (where the line is drawn).</param>
+public sealed record RoundRow(int Place, string Alternative, int? Band, RankInterval? Interval, FundingDecision? Funding, bool LastFunded);
+
+/// <summary>The sentences every output of a round prints, so the screens, the record and the command line agree.</summary>
+public static class RoundText
+{
+    /// <summary>How the budget is spent, as a clause ("spent down the ranking …").</summary>
+    public static string FundingRule(FundingRule rule) => rule == Model.FundingRule.StopAtFirstUnaffordable
+        ? "spent down the ranking until the first application the rest of the budget cannot pay in full"
+        : "spent down the ranking, passing over any application the rest of the budget cannot pay in full";
+
+    /// <summary>An application's funding decision in one or two words.</summary>
+    public static string Decision(FundingDecision decision) =>
+        decision.Funded ? "funded" : decision.PassedOver ? "passed over" : "not funded";
+
+    /// <summary>A rank interval as people read it ("3 to 6", or "12" when it is one place).</summary>
+    public static string Places(RankInterval interval) =>
+        interval.Best == interval.Worst ? $"{interval.Best}" : $"{interval.Best} to {interval.Worst}";
+}
+
 /// <summary>The figures a round adds to the analysis.</summary>
 /// <param name="Order">The ranking the round follows (the points award when it binds, else closeness), ids best first.</param>
 /// <param name="Funding">The funding line, or null when the plan sets no budget.</param>
@@ -35,7 +61,19 @@ public sealed record RoundReport(
     IReadOnlyList<ScoreBand> Bands,
     IReadOnlyList<FundingFlip> Flips,
     IReadOnlyList<ReviewerEffect> Reviewers,
-    CalibratedRanking? Calibrated = null);
+    CalibratedRanking? Calibrated = null)
+{
+    /// <summary>Each place of <see cref="Order"/> with its band, interval and funding decision, best first.</summary>
+    public IReadOnlyList<RoundRow> Rows()
+    {
+        var bands = Bands.SelectMany(b => b.Alternatives.Select(id => (id, b.Number))).ToDictionary(x => x.id, x => x.Number, StringComparer.Ordinal);
+        var intervals = Intervals.ToDictionary(i => i.Alternative, StringComparer.Ordinal);
+        var decisions = Funding?.Decisions.ToDictionary(d => d.Alternative, StringComparer.Ordinal);
+        var line = Funding?.Line ?? 0;
+        return Order.Select((id, i) => new RoundRow(i + 1, id, bands.TryGetValue(id, out var b) ? b : null,
+            intervals.GetValueOrDefault(id), decisions?.GetValueOrDefault(id), i + 1 == line)).ToArray();
+    }
+}
 
 /// <summary>
 /// Shortlists, bands and the funding line of a round (issue "lots and large rounds", item 4), from the analysis and,

@@ -6,6 +6,7 @@ using System.Text.RegularExpressions;
 using Decide.Core;
 using Decide.Core.Award;
 using Decide.Core.Analysis;
+using Decide.Core.Rounds;
 using Decide.Data;
 using Decide.Data.Entities;
 using Decide.Interchange;
@@ -132,16 +133,11 @@ public sealed partial class ExchangeService(
 
             if (run.Round is { } round)
             {
-                var bands = round.Bands.SelectMany(b => b.Alternatives.Select(a => (a, b.Number))).ToDictionary(x => x.a, x => x.Number);
-                var intervals = round.Intervals.ToDictionary(i => i.Alternative);
-                var decisions = round.Funding?.Decisions.ToDictionary(d => d.Alternative);
                 book.Sheet("Bands and funding", "Place", "Code", "Application", "Band", "Best likely place", "Worst likely place", "Requested", "Funded");
-                foreach (var (a, i) in round.Order.Select((a, i) => (a, i)))
+                foreach (var row in round.Rows())
                 {
-                    var d = decisions?.GetValueOrDefault(a);
-                    book.Row(i + 1, a, e.AlternativeName(a), bands.TryGetValue(a, out var b) ? b : null,
-                        intervals.TryGetValue(a, out var iv) ? iv.Best : null, intervals.TryGetValue(a, out var iw) ? iw.Worst : null,
-                        d?.Requested, d is null ? null : d.Funded ? "funded" : d.PassedOver ? "passed over" : "not funded");
+                    book.Row(row.Place, row.Alternative, e.AlternativeName(row.Alternative), row.Band, row.Interval?.Best, row.Interval?.Worst,
+                        row.Funding?.Requested, row.Funding is { } d ? RoundText.Decision(d) : null);
                 }
             }
 
