@@ -411,40 +411,7 @@ public static class ReviewerAssignment
         private IReadOnlyList<IReadOnlyList<string>> Parts() =>
             DesignConnectivity.Parts(_r.Applications.Select(a => a.Id).ToArray(), Assigned());
 
-        public AssignmentProposal Proposal()
-        {
-            var assigned = Assigned();
-            int matches = 0, topical = 0, most = 0;
-            for (var a = 0; a < _n; a++)
-            {
-                if (!_hasTopic[a])
-                {
-                    continue;
-                }
-
-                for (var p = 0; p < _k; p++)
-                {
-                    topical++;
-                    matches += _knows[(_reviewersOf[(a * _k) + p] * _n) + a] ? 1 : 0;
-                }
-            }
-
-            for (var x = 0; x < _m; x++)
-            {
-                for (var y = x + 1; y < _m; y++)
-                {
-                    most = Math.Max(most, _together[(x * _m) + y]);
-                }
-            }
-
-            return new AssignmentProposal(
-                new ReviewDesign(_k, _r.MaxLoad, assigned),
-                _m == 0 ? 0 : _load.Min(),
-                _m == 0 ? 0 : _load.Max(),
-                matches,
-                topical,
-                most,
-                DesignConnectivity.Parts(_r.Applications.Select(a => a.Id).ToArray(), assigned).Count);
-        }
+        public AssignmentProposal Proposal() =>
+            AssignmentFigures.Of(new ReviewDesign(_k, _r.MaxLoad, Assigned()), _r.Applications, _r.Reviewers);
     }
 }

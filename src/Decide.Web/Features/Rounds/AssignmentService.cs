@@ -143,8 +143,8 @@ public sealed class AssignmentService(
     private static AssignmentProposal Propose(ReviewDesign design, Evaluation round, HashSet<(string, string)> conflicts, ulong seed)
     {
         var request = new AssignmentRequest(
-            round.Alternatives.Select(a => new Application(a.Id, a.Name, a.Topic)).ToArray(),
-            round.Assessors.Select(a => new Reviewer(a.Id, a.Name, a.Topics)).ToArray(),
+            Applications(round),
+            Reviewers(round),
             design.ReviewersPerApplication,
             design.MaxLoad,
             conflicts,
@@ -210,35 +210,13 @@ public sealed class AssignmentService(
 
     private static AssignmentFiguresView Figures(Evaluation round, ReviewDesign design)
     {
-        var loads = round.Assessors.Select(a => design.ApplicationsOf(a.Id).Count).DefaultIfEmpty(0).ToArray();
-        var topics = round.Assessors.ToDictionary(a => a.Id, a => a.Topics ?? [], StringComparer.Ordinal);
-        int matches = 0, topical = 0;
-        foreach (var a in round.Alternatives.Where(a => !string.IsNullOrWhiteSpace(a.Topic)))
-        {
-            foreach (var r in design.ReviewersOf(a.Id))
-            {
-                topical++;
-                matches += topics.GetValueOrDefault(r)?.Contains(a.Topic!, StringComparer.OrdinalIgnoreCase) == true ? 1 : 0;
-            }
-        }
-
-        var together = new Dictionary<(string, string), int>();
-        foreach (var a in round.Alternatives)
-        {
-            var readers = design.ReviewersOf(a.Id);
-            for (var i = 0; i < readers.Count; i++)
-            {
-                for (var j = i + 1; j < readers.Count; j++)
-                {
-                    var key = string.CompareOrdinal(readers[i], readers[j]) < 0 ? (readers[i], readers[j]) : (readers[j], readers[i]);
-                    together[key] = together.GetValueOrDefault(key) + 1;
-                }
-            }
-        }
-
-        var parts = DesignConnectivity.Parts(round.Alternatives.Select(a => a.Id).ToArray(), design.Assigned).Count;
-        return new AssignmentFiguresView(loads.Min(), loads.Max(), matches, topical, together.Values.DefaultIfEmpty(0).Max(), parts);
+        var f = AssignmentFigures.Of(design, Applications(round), Reviewers(round));
+        return new AssignmentFiguresView(f.LowestLoad, f.HighestLoad, f.TopicMatches, f.TopicReviews, f.MostSharedByOnePair, f.Parts);
     }
+
+    private static Application[] Applications(Evaluation round) => round.Alternatives.Select(a => new Application(a.Id, a.Name, a.Topic)).ToArray();
+
+    private static Reviewer[] Reviewers(Evaluation round) => round.Assessors.Select(a => new Reviewer(a.Id, a.Name, a.Topics)).ToArray();
 
     private static string Sentence(string reason) => reason.Length == 0 ? reason : char.ToUpperInvariant(reason[0]) + reason[1..] + (reason.EndsWith('.') ? "" : ".");
 }
