@@ -67,6 +67,12 @@ public static class StageRules
     /// <summary>In a round, conflicts may be declared from the moment the applicants are known.</summary>
     public static readonly StageRule DeclareConflictInRound = new("declare a conflict of interest", PlanLocked, Scoring, Moderation);
 
+    /// <summary>When the declaration is confirmed against the names: before scoring in a round, from scoring otherwise.</summary>
+    public static StageRule ConfirmDeclarationFor(bool round) => round ? ConfirmDeclarationInRound : ConfirmDeclaration;
+
+    /// <summary>When a conflict may be declared: before scoring in a round, from scoring otherwise.</summary>
+    public static StageRule DeclareConflictFor(bool round) => round ? DeclareConflictInRound : DeclareConflict;
+
     /// <summary>Weight judgements are frozen with the plan.</summary>
     public static readonly StageRule ChangeWeights = new("change weight judgements (they are frozen with the plan)", Setup);
 

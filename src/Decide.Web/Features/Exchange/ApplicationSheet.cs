@@ -164,17 +164,6 @@ public static class ApplicationSheet
         return Math.Max(column - 1, 0);
     }
 
-    private static string Letter(int column)
-    {
-        var letters = new StringBuilder();
-        for (var c = column + 1; c > 0; c = (c - 1) / 26)
-        {
-            letters.Insert(0, (char)('A' + ((c - 1) % 26)));
-        }
-
-        return letters.ToString();
-    }
-
     private static RawTable ReadCsv(byte[] content)
     {
         string text;
@@ -286,8 +275,8 @@ public static class ApplicationSheet
         foreach (var (row, cells) in nonEmpty.Skip(1))
         {
             string Cell(int? column) => column is { } c && cells.TryGetValue(c, out var v) ? v.Trim() : "";
-            string At(int? column) => $"{raw.Sheet}!{Letter(column ?? 0)}{row}";
-            string Where(int? column, string what) => $"sheet \"{raw.Sheet}\", row {row}, column {Letter(column ?? 0)} ({what})";
+            string At(int? column) => $"{raw.Sheet}!{XlsxWorkbook.Column(column ?? 0)}{row}";
+            string Where(int? column, string what) => $"sheet \"{raw.Sheet}\", row {row}, column {XlsxWorkbook.Column(column ?? 0)} ({what})";
             var c = Cell(code);
             var n = Cell(name);
             if (c.Length is 0 or > 100)

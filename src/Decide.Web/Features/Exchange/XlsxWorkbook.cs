@@ -107,7 +107,8 @@ public sealed class XlsxWorkbook
         return clean.ToString();
     }
 
-    private static string Column(int index)
+    /// <summary>A zero-based column as a spreadsheet names it: 0 → A, 25 → Z, 26 → AA.</summary>
+    internal static string Column(int index)
     {
         var letters = "";
         for (var c = index + 1; c > 0; c = (c - 1) / 26)

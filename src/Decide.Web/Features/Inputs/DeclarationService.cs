@@ -93,7 +93,7 @@ public sealed class DeclarationService(
             var x = await access.LoadAsync(db, id, ct);
             x.Membership.Require(PanelRole.Assessor, PanelRole.PriceEvaluator);
             x.RequireDeclaration();
-            x.Membership.RequireStage(x.Plan.Evaluation.Reviews is null ? StageRules.ConfirmDeclaration : StageRules.ConfirmDeclarationInRound);
+            x.Membership.RequireStage(StageRules.ConfirmDeclarationFor(x.Evaluation.IsRound));
             if (x.NamesConfirmed)
             {
                 throw new DomainProblem(StatusCodes.Status409Conflict, "Already confirmed",
@@ -140,7 +140,7 @@ public sealed class DeclarationService(
         {
             var x = await access.LoadAsync(db, id, ct);
             x.Membership.Require(PanelRole.Assessor, PanelRole.PriceEvaluator);
-            x.Membership.RequireStage(x.Plan.Evaluation.Reviews is null ? StageRules.DeclareConflict : StageRules.DeclareConflictInRound);
+            x.Membership.RequireStage(StageRules.DeclareConflictFor(x.Evaluation.IsRound));
             x.RequireNamesConfirmed();
             var bidders = await InputStore.BiddersAsync(db, id, ct);
             var existing = await db.Conflicts.AsNoTracking().Where(c => c.EvaluationId == id && c.UserId == user.Id).Select(c => c.AlternativeCode).ToListAsync(ct);
@@ -264,7 +264,7 @@ public sealed class DeclarationService(
         return new MyDeclarationView(
             Declaration.Version, signed ? seat.DeclarationVersion : null, signed ? seat.DeclarationSignedAt : null,
             x.NamesConfirmed ? seat.NamesConfirmedAt : null,
-            signed && !x.NamesConfirmed && (x.Plan.Evaluation.Reviews is null ? StageRules.ConfirmDeclaration : StageRules.ConfirmDeclarationInRound).AllowsAt(x.Evaluation.Stage),
+            signed && !x.NamesConfirmed && StageRules.ConfirmDeclarationFor(x.Evaluation.IsRound).AllowsAt(x.Evaluation.Stage),
             bidders, await ConflictsAsync(db, x, user.Id, ct));
     }
 

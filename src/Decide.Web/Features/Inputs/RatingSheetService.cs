@@ -53,9 +53,10 @@ public sealed class RatingSheetService(
                 throw DomainProblem.Invalid("criterion", $"criterion \"{c.Id}\" is not assigned to you; your sheet has {string.Join(", ", DeclarationService.AssignedLinguistic(plan, seat))}");
             }
 
-            if (await InputStore.AssignedAsync(db, id, plan, seat.AssessorCode!, ct) is { } mine && !mine.Contains(bidder.Code))
+            if (plan.Reviews is not null
+                && !await db.ReviewAssignments.AnyAsync(r => r.EvaluationId == id && r.AssessorCode == seat.AssessorCode && r.AlternativeCode == bidder.Code, ct))
             {
-                throw DomainProblem.Forbidden($"\"{bidder.Name}\" is not assigned to you; in this round you rate only the {mine.Count} applications on your sheet.");
+                throw DomainProblem.Forbidden($"\"{bidder.Name}\" is not assigned to you; in this round you rate only the applications on your sheet.");
             }
 
             if (await RecusedAsync(db, id, bidder.Code, ct))
